@@ -1,0 +1,42 @@
+package org.tracewell.ui;
+
+import org.eclipse.ui.IFolderLayout;
+import org.eclipse.ui.IPageLayout;
+import org.eclipse.ui.IPerspectiveFactory;
+
+/**
+ * Axis Design: the machine editor in the middle, analysis views below and beside it.
+ * Views that are not installed yet are kept as placeholders so they open in their slot.
+ */
+public final class AxisDesignPerspective implements IPerspectiveFactory {
+
+    public static final String ID = "org.tracewell.ui.perspective.axisDesign";
+
+    /** View ids of the analysis views; their bundles register them. */
+    public static final String LOOP_ANALYSIS_VIEW = "org.tracewell.ui.view.loopAnalysis";
+    public static final String TRACKING_VIEW = "org.tracewell.ui.view.tracking";
+    public static final String CONTOUR_DEVIATION_VIEW = "org.tracewell.ui.view.contourDeviation";
+    public static final String CIRCLE_TEST_VIEW = "org.tracewell.ui.view.circleTest";
+    public static final String ERROR_BUDGET_VIEW = "org.tracewell.ui.view.errorBudget";
+    public static final String REQUIREMENT_TRACE_VIEW = "org.tracewell.ui.view.requirementTrace";
+
+    @Override
+    public void createInitialLayout(IPageLayout layout) {
+        String editorArea = layout.getEditorArea();
+        layout.setEditorAreaVisible(true);
+
+        IFolderLayout right = layout.createFolder("org.tracewell.ui.folder.right", IPageLayout.RIGHT, 0.55f, editorArea);
+        right.addPlaceholder(LOOP_ANALYSIS_VIEW);
+        right.addPlaceholder(CIRCLE_TEST_VIEW);
+        right.addPlaceholder(CONTOUR_DEVIATION_VIEW);
+
+        IFolderLayout bottom = layout.createFolder("org.tracewell.ui.folder.bottom", IPageLayout.BOTTOM, 0.65f, editorArea);
+        bottom.addPlaceholder(TRACKING_VIEW);
+        bottom.addPlaceholder(ERROR_BUDGET_VIEW);
+        bottom.addPlaceholder(REQUIREMENT_TRACE_VIEW);
+        bottom.addPlaceholder(IPageLayout.ID_PROBLEM_VIEW);
+        bottom.addPlaceholder(IPageLayout.ID_PROP_SHEET);
+
+        layout.addShowViewShortcut(LOOP_ANALYSIS_VIEW);
+    }
+}
