@@ -22,7 +22,7 @@ public final class TracewellCommand {
 
     TracewellCommand() {
         commands.put("analyze", notYet("analyze", "analyse a machine file and write the design-review report"));
-        commands.put("loop", notYet("loop", "analyse one loop given as transfer-function coefficients"));
+        commands.put("loop", new Entry("analyse one loop given as transfer-function coefficients", LoopCommand::run));
         commands.put("validate", notYet("validate", "check a machine or axis file against the model rules"));
         commands.put("diff", notYet("diff", "semantic difference of two versions of a machine file"));
     }

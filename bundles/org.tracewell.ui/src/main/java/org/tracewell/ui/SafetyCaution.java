@@ -9,6 +9,10 @@ public final class SafetyCaution {
             + "with the safety functions active (limits, emergency stop, safe torque off), "
             + "and defer to local codes, the machine's safety standards and qualified personnel.";
 
+    /** One line for the foot of views. */
+    public static final String SHORT = "computed gains are design estimates. Verify on the machine at reduced speed "
+            + "and torque with safety functions active; defer to local codes and qualified personnel.";
+
     private SafetyCaution() {
     }
 }

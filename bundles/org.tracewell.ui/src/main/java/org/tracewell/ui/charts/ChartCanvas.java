@@ -1,0 +1,80 @@
+package org.tracewell.ui.charts;
+
+import java.awt.image.BufferedImage;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
+import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.PaletteData;
+import org.eclipse.swt.graphics.Point;
+import org.eclipse.swt.widgets.Canvas;
+import org.eclipse.swt.widgets.Composite;
+import org.jfree.chart.JFreeChart;
+
+/**
+ * Shows a JFreeChart in SWT by rendering it off-screen (AWT, headless) at the control's size,
+ * so the view looks exactly like the exported PNG in the report. Re-renders only when the chart
+ * or the size changes.
+ */
+public final class ChartCanvas extends Canvas {
+
+    private JFreeChart chart;
+    private Image image;
+    private Point imageSize = new Point(0, 0);
+
+    public ChartCanvas(Composite parent, int style) {
+        super(parent, style | SWT.DOUBLE_BUFFERED | SWT.NO_BACKGROUND);
+        addPaintListener(e -> paint(e.gc));
+        addListener(SWT.Resize, e -> redraw());
+        addDisposeListener(e -> disposeImage());
+    }
+
+    /** Shows {@code newChart}; {@code null} clears the canvas. Call on the UI thread. */
+    public void setChart(JFreeChart newChart) {
+        checkWidget();
+        chart = newChart;
+        disposeImage();
+        redraw();
+    }
+
+    public JFreeChart getChart() {
+        checkWidget();
+        return chart;
+    }
+
+    private void paint(GC gc) {
+        Point size = getSize();
+        if (chart == null || size.x < 2 || size.y < 2) {
+            gc.setBackground(getDisplay().getSystemColor(SWT.COLOR_WHITE));
+            gc.fillRectangle(0, 0, size.x, size.y);
+            return;
+        }
+        if (image == null || !imageSize.equals(size)) {
+            disposeImage();
+            BufferedImage rendered = chart.createBufferedImage(size.x, size.y, BufferedImage.TYPE_INT_RGB, null);
+            image = new Image(getDisplay(), toImageData(rendered));
+            imageSize = size;
+        }
+        gc.drawImage(image, 0, 0);
+    }
+
+    private void disposeImage() {
+        if (image != null) {
+            image.dispose();
+            image = null;
+        }
+    }
+
+    static ImageData toImageData(BufferedImage rgb) {
+        int width = rgb.getWidth();
+        int height = rgb.getHeight();
+        ImageData data = new ImageData(width, height, 24, new PaletteData(0xFF0000, 0x00FF00, 0x0000FF));
+        int[] row = new int[width];
+        for (int y = 0; y < height; y++) {
+            rgb.getRGB(0, y, width, 1, row, 0, width);
+            data.setPixels(0, y, width, row, 0);
+        }
+        return data;
+    }
+}
