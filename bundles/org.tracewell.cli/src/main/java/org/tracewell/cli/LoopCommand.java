@@ -110,7 +110,7 @@ public final class LoopCommand {
             }
             double delay = 0.0;
             if (options.containsKey("--delay")) {
-                delay = parseNumber("--delay", options.get("--delay").trim());
+                delay = number("--delay", options.get("--delay").trim());
                 if (delay < 0) {
                     throw new BadInput("--delay must be >= 0 seconds, got " + options.get("--delay"));
                 }
@@ -161,6 +161,14 @@ public final class LoopCommand {
         Polynomial num = polynomial(numOption, numText);
         Polynomial den = polynomial(denOption, denText);
         return TransferFunction.of(num, den, delay);
+    }
+
+    private static double number(String option, String token) throws BadInput {
+        try {
+            return CoefficientText.parseNumber(option, token);
+        } catch (IllegalArgumentException e) {
+            throw new BadInput(e.getMessage());
+        }
     }
 
     static Polynomial polynomial(String option, String text) throws BadInput {

@@ -27,7 +27,7 @@ public final class CoefficientText {
         }
         double[] values = Arrays.stream(SEPARATORS.split(trimmed))
                 .filter(token -> !token.isEmpty())
-                .mapToDouble(token -> number(what, token))
+                .mapToDouble(token -> parseNumber(what, token))
                 .toArray();
         if (values.length == 0) {
             throw new IllegalArgumentException(what + " \"" + text + "\" holds no coefficients");
@@ -39,7 +39,8 @@ public final class CoefficientText {
         return p;
     }
 
-    private static double number(String what, String token) {
+    /** One finite decimal number, with the same rules and messages as the coefficients. */
+    public static double parseNumber(String what, String token) {
         if (!NUMBER.matcher(token).matches()) {
             throw new IllegalArgumentException(what + ": '" + token + "' is not a number (expected a decimal like 12, -0.5 or 1e-3)");
         }

@@ -170,15 +170,11 @@ public final class LoopAnalysisView extends ViewPart {
         if (t.isEmpty()) {
             return 0;
         }
-        try {
-            double v = Double.parseDouble(t);
-            if (!(v >= 0) || Double.isInfinite(v)) {
-                throw new IllegalArgumentException("Dead time must be a finite number ≥ 0 ms, got '" + t + "'");
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("Dead time: '" + t + "' is not a number of milliseconds");
+        double v = CoefficientText.parseNumber("Dead time (ms)", t);
+        if (v < 0) {
+            throw new IllegalArgumentException("Dead time must be ≥ 0 ms, got " + t);
         }
+        return v;
     }
 
     private void show(Outcome outcome) {

@@ -4,7 +4,13 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.Comparator;
 import java.util.List;
 import java.util.stream.Stream;
@@ -13,11 +19,16 @@ import org.eclipse.emf.codegen.ecore.generator.Generator;
 import org.eclipse.emf.codegen.ecore.generator.GeneratorAdapterFactory;
 import org.eclipse.emf.codegen.ecore.genmodel.GenModel;
 import org.eclipse.emf.codegen.ecore.genmodel.GenModelPackage;
+import org.eclipse.emf.codegen.ecore.genmodel.GenPackage;
 import org.eclipse.emf.codegen.ecore.genmodel.generator.GenBaseGeneratorAdapter;
 import org.eclipse.emf.codegen.ecore.genmodel.generator.GenModelGeneratorAdapterFactory;
 import org.eclipse.emf.common.util.BasicMonitor;
 import org.eclipse.emf.common.util.Diagnostic;
 import org.eclipse.emf.common.util.URI;
+import org.eclipse.emf.ecore.EAnnotation;
+import org.eclipse.emf.ecore.EAttribute;
+import org.eclipse.emf.ecore.EClass;
+import org.eclipse.emf.ecore.EClassifier;
 import org.eclipse.emf.ecore.EcorePackage;
 import org.eclipse.emf.ecore.plugin.EcorePlugin;
 import org.eclipse.emf.ecore.resource.ResourceSet;
@@ -103,6 +114,8 @@ public final class GenerateModel {
             System.exit(1);
         }
 
+        addUnitsToPropertyNames(genModel, stagingDir.resolve("org.tracewell.model.edit").resolve("plugin.properties"));
+
         for (String bundle : BUNDLES) {
             Path staged = stagingDir.resolve(bundle);
             Path target = bundlesDir.resolve(bundle);
@@ -114,6 +127,53 @@ public final class GenerateModel {
             copyTree(staged.resolve(ICONS), target.resolve(ICONS));
             System.out.println("updated " + target.resolve("src-gen"));
         }
+    }
+
+    /** Annotation source of the unit declarations in tracewell.ecore. */
+    private static final String UNITS_SOURCE = "http://tracewell.org/units";
+    private static final Pattern FEATURE_NAME = Pattern.compile("^_UI_(\\w+?)_(\\w+)_feature = ([^\\[]*)$");
+
+    /**
+     * The property sheet edits stored (SI) values, so each property name says its SI unit, e.g. "Lead [m]",
+     * "Max Velocity [m/s | rad/s]". Entries that already carry a unit are left alone.
+     */
+    private static void addUnitsToPropertyNames(GenModel genModel, Path properties) throws IOException {
+        if (!Files.isRegularFile(properties)) {
+            return;
+        }
+        Map<String, String> units = new HashMap<>();
+        for (GenPackage genPackage : genModel.getGenPackages()) {
+            for (EClassifier classifier : genPackage.getEcorePackage().getEClassifiers()) {
+                if (classifier instanceof EClass eClass) {
+                    for (EAttribute attribute : eClass.getEAttributes()) {
+                        EAnnotation annotation = attribute.getEAnnotation(UNITS_SOURCE);
+                        String unit = annotation == null ? null : annotation.getDetails().get("unit");
+                        if (unit != null && !unit.isEmpty()) {
+                            String rotary = annotation.getDetails().get("rotaryUnit");
+                            units.put(eClass.getName() + "_" + attribute.getName(),
+                                    rotary == null || rotary.equals(unit) ? unit : unit + " | " + rotary);
+                        }
+                    }
+                }
+            }
+        }
+        List<String> lines = Files.readAllLines(properties, StandardCharsets.ISO_8859_1);
+        List<String> result = new ArrayList<>(lines.size());
+        for (String line : lines) {
+            Matcher m = FEATURE_NAME.matcher(line);
+            String unit = m.matches() ? units.get(m.group(1) + "_" + m.group(2)) : null;
+            result.add(unit == null ? line : line.stripTrailing() + " [" + asciiEscaped(unit) + "]");
+        }
+        Files.write(properties, result, StandardCharsets.ISO_8859_1);
+    }
+
+    /** .properties files are Latin-1; \\uXXXX keeps them readable by every loader. */
+    private static String asciiEscaped(String text) {
+        StringBuilder out = new StringBuilder();
+        for (char c : text.toCharArray()) {
+            out.append(c < 128 ? String.valueOf(c) : String.format("\\u%04x", (int) c));
+        }
+        return out.toString();
     }
 
     private static String severityName(int severity) {
