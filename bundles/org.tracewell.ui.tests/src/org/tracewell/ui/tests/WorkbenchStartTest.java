@@ -18,7 +18,7 @@ import org.eclipse.ui.PlatformUI;
 import org.junit.jupiter.api.Test;
 import org.tracewell.ui.AboutDialog;
 import org.tracewell.ui.AxisDesignPerspective;
-import org.tracewell.ui.SafetyCaution;
+import org.tracewell.core.SafetyCaution;
 
 /** The product starts as a user sees it: one window, the Axis Design perspective, About with the caution. */
 class WorkbenchStartTest {

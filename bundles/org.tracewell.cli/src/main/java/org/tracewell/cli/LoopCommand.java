@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.apache.commons.math3.complex.Complex;
+import org.tracewell.core.SafetyCaution;
 import org.tracewell.engine.loop.LoopAnalysis;
 import org.tracewell.engine.loop.LoopAnalyzer;
 import org.tracewell.engine.loop.Margins;
@@ -42,8 +43,7 @@ import com.google.gson.JsonPrimitive;
 public final class LoopCommand {
 
     /** Printed under every table: the figures come from a model, the machine must confirm them. */
-    public static final String CAUTION =
-            "Caution: verify gains on the real axis at reduced speed and torque with safety functions active.";
+    public static final String CAUTION = "Caution: " + SafetyCaution.SHORT;
 
 
 

@@ -23,8 +23,8 @@ public final class TracewellCommand {
     TracewellCommand() {
         commands.put("analyze", notYet("analyze", "analyse a machine file and write the design-review report"));
         commands.put("loop", new Entry("analyse one loop given as transfer-function coefficients", LoopCommand::run));
-        commands.put("validate", notYet("validate", "check a machine or axis file against the model rules"));
-        commands.put("diff", notYet("diff", "semantic difference of two versions of a machine file"));
+        commands.put("validate", new Entry("check a machine or axis file against the model rules", ValidateCommand::run));
+        commands.put("diff", new Entry("semantic difference of two versions of a machine file", DiffCommand::run));
     }
 
     public static void main(String[] args) {

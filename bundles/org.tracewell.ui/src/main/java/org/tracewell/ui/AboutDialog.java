@@ -11,6 +11,7 @@ import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.Text;
+import org.tracewell.core.SafetyCaution;
 
 /** Product name, version and the safety caution every user must see. */
 public final class AboutDialog extends Dialog {

@@ -27,7 +27,7 @@ import org.tracewell.engine.loop.LoopAnalysis;
 import org.tracewell.engine.loop.LoopAnalyzer;
 import org.tracewell.engine.poly.CoefficientText;
 import org.tracewell.engine.tf.TransferFunction;
-import org.tracewell.ui.SafetyCaution;
+import org.tracewell.core.SafetyCaution;
 import org.tracewell.ui.charts.ChartCanvas;
 
 /**

@@ -1,4 +1,4 @@
-package org.tracewell.ui;
+package org.tracewell.core;
 
 /** The caution shown wherever gains computed here could reach a real machine. */
 public final class SafetyCaution {

@@ -1,0 +1,2 @@
+/** Semantic difference of two versions of a model, matched by stable ids, values in display units. */
+package org.tracewell.core.diff;

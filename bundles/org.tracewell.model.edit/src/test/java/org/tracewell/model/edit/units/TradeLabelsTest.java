@@ -1,0 +1,97 @@
+package org.tracewell.model.edit.units;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import org.eclipse.emf.edit.provider.IItemLabelProvider;
+import org.junit.jupiter.api.Test;
+import org.tracewell.model.Axis;
+import org.tracewell.model.BudgetLine;
+import org.tracewell.model.BudgetSource;
+import org.tracewell.model.CascadeController;
+import org.tracewell.model.ContourMetric;
+import org.tracewell.model.ErrorClass;
+import org.tracewell.model.Machine;
+import org.tracewell.model.NotchFilter;
+import org.tracewell.model.Requirement;
+import org.tracewell.model.RequirementKind;
+import org.tracewell.model.RigidScrewDrive;
+import org.tracewell.model.TracewellFactory;
+import org.tracewell.model.provider.TracewellItemProviderAdapterFactory;
+
+class TradeLabelsTest {
+
+    private static final TracewellFactory F = TracewellFactory.eINSTANCE;
+
+    private static Axis yAxis() {
+        Axis y = F.createAxis();
+        y.setName("Y");
+        RigidScrewDrive screw = F.createRigidScrewDrive();
+        screw.setLead(0.010);
+        screw.setLoadMass(180.0);
+        y.setPlant(screw);
+        CascadeController controller = F.createCascadeController();
+        controller.setPositionGain(50.0); // 50 1/s = 3.0 (m/min)/mm
+        controller.setVelocityIntegralTime(0.006);
+        y.setController(controller);
+        return y;
+    }
+
+    @Test
+    void axisLabelInTradeUnits() {
+        assertEquals("Y · ball screw 10 mm · Kv 3.0 (m/min)/mm", TradeLabels.text(yAxis()));
+    }
+
+    @Test
+    void itemProvidersUseTheTradeLabels() {
+        TracewellItemProviderAdapterFactory factory = new TracewellItemProviderAdapterFactory();
+        Axis y = yAxis();
+        IItemLabelProvider labels = (IItemLabelProvider) factory.adapt(y, IItemLabelProvider.class);
+        assertEquals("Y · ball screw 10 mm · Kv 3.0 (m/min)/mm", labels.getText(y));
+        IItemLabelProvider plantLabels = (IItemLabelProvider) factory.adapt(y.getPlant(), IItemLabelProvider.class);
+        assertEquals("ball screw 10 mm · load 180 kg", plantLabels.getText(y.getPlant()));
+        factory.dispose();
+    }
+
+    @Test
+    void changingTheControllerRefreshesTheAxisLabel() {
+        TracewellItemProviderAdapterFactory factory = new TracewellItemProviderAdapterFactory();
+        Axis y = yAxis();
+        factory.adapt(y, IItemLabelProvider.class);
+        factory.adapt(y.getController(), IItemLabelProvider.class);
+        java.util.List<Object> refreshed = new java.util.ArrayList<>();
+        factory.addListener(n -> refreshed.add(((org.eclipse.emf.edit.provider.ViewerNotification) n).getElement()));
+        ((CascadeController) y.getController()).setPositionGain(40.0);
+        assertEquals(java.util.List.of(y.getController(), y), refreshed);
+        factory.dispose();
+    }
+
+    @Test
+    void controllerFilterRequirementBudgetAndMachineLabels() {
+        Axis y = yAxis();
+        assertEquals("cascade · Kv 3.0 (m/min)/mm · Tn 6 ms", TradeLabels.text(y.getController()));
+        NotchFilter notch = F.createNotchFilter();
+        notch.setCentreFrequency(110.0);
+        notch.setWidth(30.0);
+        assertEquals("notch 110 Hz, width 30 Hz", TradeLabels.text(notch));
+
+        Requirement g = F.createRequirement();
+        g.setId("lm3020-r1");
+        g.setKind(RequirementKind.CONTOUR_DEVIATION);
+        g.setMetric(ContourMetric.CIRCULAR_DEVIATION);
+        g.setLimit(25e-6);
+        g.setDisplayUnit("µm");
+        assertEquals("lm3020-r1 · circular deviation G ≤ 25 µm", TradeLabels.text(g));
+
+        BudgetLine line = F.createBudgetLine();
+        line.setAxis(y);
+        line.setSource(BudgetSource.FRICTION_REVERSAL);
+        line.setValue(3.5e-6);
+        line.setErrorClass(ErrorClass.SYSTEMATIC);
+        assertEquals("Y friction reversal · 3.5 µm systematic", TradeLabels.text(line));
+
+        Machine m = F.createMachine();
+        m.setName("LM-3020");
+        m.getAxes().add(y);
+        assertEquals("LM-3020 · 1 axis", TradeLabels.text(m));
+    }
+}
