@@ -21,7 +21,8 @@ public final class TracewellCommand {
     private final Map<String, Entry> commands = new LinkedHashMap<>();
 
     TracewellCommand() {
-        commands.put("analyze", notYet("analyze", "analyse a machine file and write the design-review report"));
+        commands.put("analyze", new Entry("analyse a machine file and write the design-review report",
+                AnalyzeCommand::run));
         commands.put("loop", new Entry("analyse one loop given as transfer-function coefficients", LoopCommand::run));
         commands.put("validate", new Entry("check a machine or axis file against the model rules", ValidateCommand::run));
         commands.put("diff", new Entry("semantic difference of two versions of a machine file", DiffCommand::run));
@@ -64,13 +65,6 @@ public final class TracewellCommand {
         out.printf("  %-10s %s%n", "--version", "print the version");
         out.println();
         out.println("Exit codes: 0 ok / all requirements met, 1 a requirement violated, 2 bad input, 3 internal error.");
-    }
-
-    private static Entry notYet(String name, String summary) {
-        return new Entry(summary + " (not available yet)", (args, out, err) -> {
-            err.println("tracewell " + name + ": not available yet in this version (" + version() + ").");
-            return ExitCode.BAD_INPUT;
-        });
     }
 
     /** Bundle-Version of this bundle's jar, e.g. "0.1.0.202612011830"; "development" when run from classes. */

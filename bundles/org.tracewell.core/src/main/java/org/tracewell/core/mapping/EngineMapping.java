@@ -108,7 +108,7 @@ public final class EngineMapping {
             AxisLimits limits = new AxisLimits(axis.getMaxVelocity(), axis.getMaxAcceleration(), axis.getMaxJerk());
             Optional<String> partner = Optional.ofNullable(axis.getGantryPartner()).map(Axis::getId);
             return new MappedAxis(axis.getId(), axis.getName(), axis.getKind() == AxisKind.ROTARY, model, limits,
-                    partner, notes);
+                    partner, notes, positionResolution(axis.getEncoder(), plant));
         } catch (IllegalArgumentException rejected) {
             throw new MappingException(axis.getId(), describe(axis) + ": the engine rejects a value: "
                     + rejected.getMessage() + " (run validation for the valid ranges)", rejected);
@@ -228,6 +228,24 @@ public final class EngineMapping {
             return PositionSensor.MOTOR;
         }
         return encoder.getSide() == EncoderSide.LOAD ? PositionSensor.LOAD : PositionSensor.MOTOR;
+    }
+
+    /**
+     * Encoder step at the load: a linear scale's resolution as given; a rotary encoder's 2π/counts, carried to the
+     * load through the drive ratio when it sits on the motor. 0 when the model gives no resolution.
+     */
+    static double positionResolution(Encoder encoder, AxisPlant plant) {
+        if (encoder == null) {
+            return 0.0;
+        }
+        if (encoder.getLinearResolution() > 0) {
+            return encoder.getLinearResolution();
+        }
+        if (encoder.getCountsPerRevolution() > 0) {
+            double step = 2.0 * Math.PI / encoder.getCountsPerRevolution();
+            return encoder.getSide() == EncoderSide.LOAD ? step : step * Math.abs(plant.loadPerMotorRadian());
+        }
+        return 0.0;
     }
 
     // ------------------------------------------------------------------------------------------------ contours

@@ -1,0 +1,30 @@
+package org.tracewell.requirements;
+
+import org.tracewell.core.analysis.CancellationFlag;
+import org.tracewell.core.analysis.MachineAnalysis;
+import org.tracewell.core.analysis.MachineAnalyzer;
+import org.tracewell.core.analysis.MachineBudget;
+import org.tracewell.core.analysis.MachineBudgets;
+import org.tracewell.core.analysis.ProgressListener;
+import org.tracewell.core.mapping.EngineMapping;
+import org.tracewell.core.mapping.MappingException;
+import org.tracewell.model.Machine;
+
+/** The whole pipeline for one machine: map, analyse, budget, evaluate requirements. */
+public final class DesignReview {
+
+    private DesignReview() {
+    }
+
+    /**
+     * @param provenance where the machine came from; its contour filter limits the contours analysed
+     */
+    public static ReviewResults run(Machine machine, ReviewProvenance provenance, ProgressListener progress,
+            CancellationFlag cancel) throws MappingException {
+        MachineAnalysis analysis = MachineAnalyzer.analyze(EngineMapping.map(machine), provenance.contourFilter(),
+                progress, cancel);
+        MachineBudget budget = MachineBudgets.build(machine, analysis);
+        RequirementReport requirements = RequirementEvaluator.evaluate(machine, analysis, budget);
+        return new ReviewResults(analysis, budget, requirements, provenance);
+    }
+}
