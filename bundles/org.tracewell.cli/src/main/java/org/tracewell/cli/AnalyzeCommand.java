@@ -3,7 +3,6 @@ package org.tracewell.cli;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.PrintStream;
-import java.net.URISyntaxException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,6 +19,7 @@ import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
+import org.tracewell.core.Examples;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.core.analysis.AnalysisCancelledException;
 import org.tracewell.core.analysis.AxisResult;
@@ -56,7 +56,7 @@ public final class AnalyzeCommand {
 
     static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...]";
     static final String DEFAULT_OUT = "tracewell-report";
-    static final String EXAMPLE = "LM-3020.machine";
+    static final String EXAMPLE = Examples.LM_3020;
 
     private AnalyzeCommand() {
     }
@@ -190,43 +190,13 @@ public final class AnalyzeCommand {
         return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours);
     }
 
-    /**
-     * The bundled examples: system property {@code tracewell.examples} (the launcher sets it), else the first
-     * {@code examples/} holding the LM-3020 walking up from the working directory, else walking up from the running
-     * jar (the product's folder).
-     */
+    /** The bundled examples (see {@link Examples#folder()}); a usage error when they cannot be found. */
     static Path examplesFolder() {
-        String configured = System.getProperty("tracewell.examples");
-        if (configured != null && !configured.isBlank()) {
-            return Path.of(configured);
-        }
-        Path found = findUpwards(Path.of("").toAbsolutePath());
-        if (found != null) {
-            return found;
-        }
         try {
-            var source = AnalyzeCommand.class.getProtectionDomain().getCodeSource();
-            if (source != null) {
-                found = findUpwards(Path.of(source.getLocation().toURI()).toAbsolutePath());
-                if (found != null) {
-                    return found;
-                }
-            }
-        } catch (URISyntaxException | IllegalArgumentException ignored) {
-            // fall through to the message below
+            return Examples.folder();
+        } catch (IllegalStateException e) {
+            throw new IllegalArgumentException("no FILE given and " + e.getMessage() + "; give a .machine file instead");
         }
-        throw new IllegalArgumentException("no FILE given and the bundled examples/" + EXAMPLE + " was not found;"
-                + " give a .machine file or set -Dtracewell.examples=DIR");
-    }
-
-    private static Path findUpwards(Path start) {
-        for (Path dir = start; dir != null; dir = dir.getParent()) {
-            Path candidate = dir.resolve("examples");
-            if (Files.isRegularFile(candidate.resolve(EXAMPLE))) {
-                return candidate;
-            }
-        }
-        return null;
     }
 
     static String csvName(ContourResult contour, ContourRun run) {

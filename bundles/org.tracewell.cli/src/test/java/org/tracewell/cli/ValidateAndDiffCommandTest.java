@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.function.BiFunction;
 
+import org.tracewell.core.Examples;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -34,18 +35,8 @@ class ValidateAndDiffCommandTest {
         int run(String[] args, PrintStream out, PrintStream err);
     }
 
-    /** The examples folder: -Dtracewell.examples, else found above the working directory. */
     private static Path examples() {
-        String configured = System.getProperty("tracewell.examples");
-        if (configured != null) {
-            return Path.of(configured);
-        }
-        for (Path dir = Path.of("").toAbsolutePath(); dir != null; dir = dir.getParent()) {
-            if (Files.isRegularFile(dir.resolve("examples/LM-3020.machine"))) {
-                return dir.resolve("examples");
-            }
-        }
-        throw new IllegalStateException("examples/ not found; set -Dtracewell.examples");
+        return Examples.folder();
     }
 
     /** A copy of the examples with one text replacement in one file. */

@@ -18,22 +18,43 @@ public final class Examples {
     }
 
     /**
-     * The examples folder: system property {@code tracewell.examples}, else the first {@code examples/} holding
-     * the LM-3020 found walking up from the working directory (a bundle folder in the reactor build).
+     * The examples folder: system property {@code tracewell.examples} (the launcher sets it), else the first
+     * {@code examples/} holding the LM-3020 found walking up from the working directory (a bundle folder in the
+     * reactor build), else walking up from this bundle's jar (inside a product next to a checkout).
+     *
+     * @throws IllegalStateException naming where it looked
      */
     public static Path folder() {
         String configured = System.getProperty("tracewell.examples");
         if (configured != null && !configured.isBlank()) {
             return Path.of(configured).toAbsolutePath().normalize();
         }
-        for (Path dir = Path.of("").toAbsolutePath(); dir != null; dir = dir.getParent()) {
+        Path found = findUpwards(Path.of("").toAbsolutePath());
+        if (found == null) {
+            try {
+                var source = Examples.class.getProtectionDomain().getCodeSource();
+                if (source != null) {
+                    found = findUpwards(Path.of(source.getLocation().toURI()).toAbsolutePath());
+                }
+            } catch (java.net.URISyntaxException | IllegalArgumentException | java.nio.file.FileSystemNotFoundException e) {
+                found = null;
+            }
+        }
+        if (found == null) {
+            throw new IllegalStateException("examples/" + LM_3020 + " not found above " + Path.of("").toAbsolutePath()
+                    + "; set -Dtracewell.examples=PATH");
+        }
+        return found;
+    }
+
+    private static Path findUpwards(Path start) {
+        for (Path dir = start; dir != null; dir = dir.getParent()) {
             Path candidate = dir.resolve("examples");
             if (Files.isRegularFile(candidate.resolve(LM_3020))) {
                 return candidate;
             }
         }
-        throw new IllegalStateException("examples/" + LM_3020 + " not found above " + Path.of("").toAbsolutePath()
-                + "; set -Dtracewell.examples=PATH");
+        return null;
     }
 
     public static Path file(String relative) {
