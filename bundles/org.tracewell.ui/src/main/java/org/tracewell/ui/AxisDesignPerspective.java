@@ -25,7 +25,7 @@ public final class AxisDesignPerspective implements IPerspectiveFactory {
         String editorArea = layout.getEditorArea();
         layout.setEditorAreaVisible(true);
 
-        IFolderLayout right = layout.createFolder("org.tracewell.ui.folder.right", IPageLayout.RIGHT, 0.30f, editorArea);
+        IFolderLayout right = layout.createFolder("org.tracewell.ui.folder.right", IPageLayout.RIGHT, 0.52f, editorArea);
         right.addView(LOOP_ANALYSIS_VIEW);
         right.addPlaceholder(CIRCLE_TEST_VIEW);
         right.addPlaceholder(CONTOUR_DEVIATION_VIEW);

@@ -3,10 +3,19 @@ package org.tracewell.ui.views;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
 
 import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.ListenerList;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.Job;
+import org.eclipse.emf.common.notify.Notification;
+import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.util.EContentAdapter;
+import org.eclipse.jface.resource.JFaceResources;
+import org.eclipse.jface.viewers.ISelection;
+import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.CTabFolder;
 import org.eclipse.swt.custom.CTabItem;
@@ -21,19 +30,28 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
+import org.eclipse.ui.ISelectionListener;
+import org.eclipse.ui.IWorkbenchPart;
 import org.eclipse.ui.part.ViewPart;
 import org.jfree.chart.JFreeChart;
+import org.tracewell.core.mapping.EngineMapping;
+import org.tracewell.core.mapping.MappingException;
+import org.tracewell.engine.axis.AxisModel;
 import org.tracewell.engine.loop.LoopAnalysis;
 import org.tracewell.engine.loop.LoopAnalyzer;
 import org.tracewell.engine.poly.CoefficientText;
 import org.tracewell.engine.tf.TransferFunction;
 import org.tracewell.core.SafetyCaution;
+import org.tracewell.model.Axis;
 import org.tracewell.ui.charts.ChartCanvas;
 
 /**
  * Loop Analysis: type, error constants, steady-state errors, margins, bandwidth and step
- * figures of one loop, with Bode, step and pole-zero charts. The loop is typed as
- * transfer-function coefficients; edits are analysed off the UI thread after a short pause.
+ * figures of one loop, with Bode, step and pole-zero charts. The loop is either typed as
+ * transfer-function coefficients, or it is the position loop of the axis selected in the
+ * Machine Editor (or any part whose selection holds a model element): the view follows the
+ * selection and re-analyses when that axis changes. Analyses run off the UI thread after a
+ * short pause; only the newest result is shown.
  */
 public final class LoopAnalysisView extends ViewPart {
 
@@ -42,11 +60,21 @@ public final class LoopAnalysisView extends ViewPart {
     /** Pause after the last keystroke before analysing, ms. */
     static final long DEBOUNCE_MS = 250;
 
+    /**
+     * Pause after a model change or a selection before analysing, ms: short, because a change arrives as one command
+     * (not per keystroke); it only folds bursts (an undo of several commands, arrow keys in the tree) into one run.
+     */
+    static final int MODEL_DEBOUNCE_MS = 30;
+
+    /** Title shown for the typed loop. */
+    public static final String TYPED_TITLE = "Typed loop";
+
     private Text numerator;
     private Text denominator;
     private Text feedbackNumerator;
     private Text feedbackDenominator;
     private Text deadTimeMs;
+    private Label title;
     private Label message;
     private Table table;
     private ChartCanvas bode;
@@ -55,10 +83,32 @@ public final class LoopAnalysisView extends ViewPart {
 
     private final AtomicLong generation = new AtomicLong();
     private volatile LoopAnalysis shown;
+    private volatile String shownTitle;
+    private volatile long lastRedrawNanos;
+    private volatile long lastAnalysisNanos;
+    private volatile long lastChartsNanos;
+    private final ListenerList<Consumer<LoopAnalysis>> redrawListeners = new ListenerList<>();
+
+    private Axis followed;
+    private final EContentAdapter axisChanges = new EContentAdapter() {
+        @Override
+        public void notifyChanged(Notification notification) {
+            super.notifyChanged(notification);
+            if (!notification.isTouch()) {
+                scheduleFollowed(MODEL_DEBOUNCE_MS);
+            }
+        }
+    };
+    private final ISelectionListener selectionListener = this::selectionChanged;
 
     @Override
     public void createPartControl(Composite parent) {
         parent.setLayout(new GridLayout(1, false));
+
+        title = new Label(parent, SWT.NONE);
+        title.setFont(JFaceResources.getBannerFont());
+        title.setText(TYPED_TITLE);
+        title.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
 
         Composite form = new Composite(parent, SWT.NONE);
         form.setLayout(new GridLayout(6, false));
@@ -86,7 +136,7 @@ public final class LoopAnalysisView extends ViewPart {
         for (String title : new String[] {"Quantity", "Value"}) {
             TableColumn column = new TableColumn(table, SWT.LEFT);
             column.setText(title);
-            column.setWidth(title.equals("Quantity") ? 190 : 250);
+            column.setWidth(title.equals("Quantity") ? 190 : 330);
         }
         CTabFolder tabs = new CTabFolder(sash, SWT.BORDER | SWT.BOTTOM);
         bode = tab(tabs, "Bode");
@@ -103,6 +153,118 @@ public final class LoopAnalysisView extends ViewPart {
             t.addModifyListener(e -> schedule(DEBOUNCE_MS));
         }
         schedule(0);
+        getSite().getPage().addSelectionListener(selectionListener);
+        ISelection current = getSite().getPage().getSelection();
+        if (current != null) {
+            selectionChanged(getSite().getPage().getActivePart(), current);
+        }
+    }
+
+    // ------------------------------------------------------------------------------------------------ following an axis
+
+    private void selectionChanged(IWorkbenchPart part, ISelection selection) {
+        if (part == this || !(selection instanceof IStructuredSelection structured)
+                || !(structured.getFirstElement() instanceof EObject element)) {
+            return;
+        }
+        for (EObject e = element; e != null; e = e.eContainer()) {
+            if (e instanceof Axis axis) {
+                follow(axis);
+                return;
+            }
+        }
+    }
+
+    /** Shows the position loop of {@code axis} and keeps it up to date while the axis changes; null stops. */
+    public void follow(Axis axis) {
+        if (axis == followed) {
+            return;
+        }
+        if (followed != null) {
+            followed.eAdapters().remove(axisChanges);
+        }
+        followed = axis;
+        if (axis != null) {
+            axis.eAdapters().add(axisChanges);
+            scheduleFollowed(MODEL_DEBOUNCE_MS);
+        }
+    }
+
+    /** The axis whose position loop the view follows, or null. */
+    public Axis followedAxis() {
+        return followed;
+    }
+
+    /**
+     * Maps the followed axis on the UI thread (the model is only read there) after {@code delayMs}, then analyses its
+     * position loop in a job.
+     */
+    private void scheduleFollowed(int delayMs) {
+        long mine = generation.incrementAndGet();
+        Display display = table.getDisplay();
+        display.timerExec(delayMs, () -> {
+            Axis axis = followed;
+            if (mine != generation.get() || axis == null || table.isDisposed()) {
+                return;
+            }
+            String loopTitle = (axis.getName() == null ? "axis" : axis.getName()) + " · position loop";
+            AxisModel engineModel;
+            try {
+                engineModel = EngineMapping.mapAxis(axis).model();
+            } catch (MappingException | RuntimeException e) {
+                showRejected(loopTitle, e.getMessage());
+                return;
+            }
+            // Only the position loop, exactly as AxisModel.analyze() forms it (dead time as Padé of the model's
+            // order); the velocity loop and tracking figures are not shown here and would double the work.
+            run(mine, loopTitle, () -> LoopAnalyzer.analyze(
+                    engineModel.positionOpenLoop().withPadeDelay(engineModel.padeOrder()), null));
+        });
+    }
+
+    /** Shows a given analysis (charts are drawn off the UI thread), e.g. a loop another view has analysed. */
+    public void showAnalysis(String loopTitle, LoopAnalysis analysis) {
+        run(generation.incrementAndGet(), loopTitle, () -> analysis);
+    }
+
+    /** Analyses and shows the loop {@code forward} with feedback {@code feedback} under {@code loopTitle}. */
+    public void showLoop(String loopTitle, TransferFunction forward, TransferFunction feedback) {
+        run(generation.incrementAndGet(), loopTitle, () -> LoopAnalyzer.analyze(forward, feedback));
+    }
+
+    private void run(long mine, String loopTitle, Supplier<LoopAnalysis> analysis) {
+        Display display = table.getDisplay();
+        Job job = Job.create("Loop analysis: " + loopTitle, (IProgressMonitor monitor) -> {
+            if (mine != generation.get() || monitor.isCanceled()) {
+                return Status.CANCEL_STATUS;
+            }
+            Outcome outcome;
+            try {
+                long started = System.nanoTime();
+                LoopAnalysis result = analysis.get();
+                long analysed = System.nanoTime();
+                outcome = withCharts(result);
+                lastAnalysisNanos = analysed - started;
+                lastChartsNanos = System.nanoTime() - analysed;
+            } catch (IllegalArgumentException | ArithmeticException e) {
+                outcome = new Outcome(null, null, null, null, e.getMessage());
+            }
+            Outcome result = outcome;
+            display.asyncExec(() -> {
+                if (mine == generation.get() && !table.isDisposed()) {
+                    title.setText(loopTitle);
+                    show(result);
+                }
+            });
+            return Status.OK_STATUS;
+        });
+        job.setSystem(true);
+        job.schedule();
+    }
+
+    private void showRejected(String loopTitle, String reason) {
+        title.setText(loopTitle);
+        show(new Outcome(null, null, null, null, reason));
     }
 
     private static Text field(Composite form, String label, String initial, String tooltip) {
@@ -140,6 +302,7 @@ public final class LoopAnalysisView extends ViewPart {
             Outcome outcome = compute(num, den, fbNum, fbDen, delay);
             display.asyncExec(() -> {
                 if (mine == generation.get() && !table.isDisposed()) {
+                    title.setText(TYPED_TITLE);
                     show(outcome);
                 }
             });
@@ -157,12 +320,15 @@ public final class LoopAnalysisView extends ViewPart {
                     CoefficientText.parse("Denominator", den), delayMs / 1000.0);
             TransferFunction feedback = TransferFunction.of(CoefficientText.parse("Feedback numerator", fbNum),
                     CoefficientText.parse("Feedback denominator", fbDen));
-            LoopAnalysis analysis = LoopAnalyzer.analyze(forward, feedback);
-            return new Outcome(analysis, LoopCharts.bode(analysis), LoopCharts.step(analysis),
-                    LoopCharts.poles(analysis), null);
+            return withCharts(LoopAnalyzer.analyze(forward, feedback));
         } catch (IllegalArgumentException e) {
             return new Outcome(null, null, null, null, e.getMessage());
         }
+    }
+
+    private static Outcome withCharts(LoopAnalysis analysis) {
+        return new Outcome(analysis, LoopCharts.bode(analysis), LoopCharts.step(analysis), LoopCharts.poles(analysis),
+                null);
     }
 
     private static double parseDelay(String text) {
@@ -185,6 +351,7 @@ public final class LoopAnalysisView extends ViewPart {
             return;
         }
         shown = outcome.analysis();
+        shownTitle = title.getText();
         message.setText(outcome.analysis().stable() ? "Closed loop stable."
                 : "Closed loop UNSTABLE: no steady-state error, bandwidth or step figures (the final-value theorem does not apply).");
         message.setForeground(message.getDisplay().getSystemColor(
@@ -197,6 +364,48 @@ public final class LoopAnalysisView extends ViewPart {
         step.setChart(outcome.step());
         poles.setChart(outcome.poles());
         message.getParent().layout(true);
+        // Paint now, so the time stamp is that of the finished redraw rather than of a queued one.
+        table.update();
+        for (ChartCanvas chart : List.of(bode, step, poles)) {
+            if (chart.isVisible()) {
+                chart.update();
+            }
+        }
+        lastRedrawNanos = System.nanoTime();
+        for (Consumer<LoopAnalysis> listener : redrawListeners) {
+            listener.accept(outcome.analysis());
+        }
+    }
+
+    /** The title of the loop now on screen, e.g. "Y · position loop" or {@link #TYPED_TITLE}. */
+    public String shownTitle() {
+        return shownTitle;
+    }
+
+    /** {@link System#nanoTime()} when the last analysis finished drawing; 0 before the first. */
+    public long lastRedrawNanos() {
+        return lastRedrawNanos;
+    }
+
+    /** How long the last model-driven run took in its job: analysis and chart building, ns. */
+    public long[] lastJobNanos() {
+        return new long[] {lastAnalysisNanos, lastChartsNanos};
+    }
+
+    /** Called on the UI thread each time an analysis has been drawn. */
+    public void addRedrawListener(Consumer<LoopAnalysis> listener) {
+        redrawListeners.add(listener);
+    }
+
+    public void removeRedrawListener(Consumer<LoopAnalysis> listener) {
+        redrawListeners.remove(listener);
+    }
+
+    @Override
+    public void dispose() {
+        getSite().getPage().removeSelectionListener(selectionListener);
+        follow(null);
+        super.dispose();
     }
 
     /** The analysis now on screen (for tests and for other views); null before the first. */

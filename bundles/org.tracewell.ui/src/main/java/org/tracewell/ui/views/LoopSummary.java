@@ -27,13 +27,13 @@ final class LoopSummary {
         rows.add(row("Kp", format(ss.kp(), 4)));
         rows.add(row("Kv", format(ss.kv(), 4) + " 1/s" + (Double.isFinite(ss.kv()) && ss.kv() > 0
                 ? " = " + format(TradeUnits.kvToMPerMinPerMm(ss.kv()), 3) + " (m/min)/mm" : "")));
-        rows.add(row("Ka", format(ss.ka(), 4) + " 1/s²"));
+        rows.add(row("Ka", withUnit(ss.ka(), "1/s²")));
         rows.add(row("Closed loop", a.stable() ? "stable" : "UNSTABLE"));
         if (a.steadyStateErrors().isPresent()) {
             SteadyStateErrors e = a.steadyStateErrors().get();
             rows.add(row("Error, unit step", format(e.unitStep(), 4)));
-            rows.add(row("Error, unit ramp", format(e.unitRamp(), 4) + " s"));
-            rows.add(row("Error, unit parabola", format(e.unitParabola(), 4) + " s²"));
+            rows.add(row("Error, unit ramp", withUnit(e.unitRamp(), "s")));
+            rows.add(row("Error, unit parabola", withUnit(e.unitParabola(), "s²")));
             rows.add(row("Parabola convention", SteadyStateErrors.PARABOLA_CONVENTION));
             double followingAt1 = e.ramp(TradeUnits.mPerSFromMPerMin(1.0));
             rows.add(row("Following error at 1 m/min", format(TradeUnits.micrometres(followingAt1), 4) + " µm"));
@@ -41,8 +41,8 @@ final class LoopSummary {
             rows.add(row("Steady-state errors", "none: closed loop not stable"));
         }
         Margins m = a.margins();
-        rows.add(row("Gain margin", format(m.gainMarginDb(), 4) + " dB" + at(m.phaseCrossoverRadPerSec())));
-        rows.add(row("Phase margin", format(m.phaseMarginDeg(), 4) + "°" + at(m.gainCrossoverRadPerSec())));
+        rows.add(row("Gain margin", withUnit(m.gainMarginDb(), "dB") + at(m.phaseCrossoverRadPerSec())));
+        rows.add(row("Phase margin", withUnit(m.phaseMarginDeg(), "°") + at(m.gainCrossoverRadPerSec())));
         a.delayMarginSeconds().ifPresent(d -> rows.add(row("Delay margin", format(d * 1e3, 4) + " ms")));
         a.sensitivityPeak().ifPresent(p -> rows.add(row("Sensitivity peak Ms", format(p.peak(), 4)
                 + " at " + format(TradeUnits.hertz(p.frequencyRadPerSec()), 4) + " Hz")));
@@ -60,6 +60,14 @@ final class LoopSummary {
                     + format(Math.abs(p.getImaginary()), 4) + "j 1/s"));
         }
         return rows;
+    }
+
+    /** A unit only on finite values: "∞", not "∞ s²". */
+    private static String withUnit(double value, String unit) {
+        if (!Double.isFinite(value)) {
+            return format(value, 4);
+        }
+        return format(value, 4) + (unit.equals("°") ? unit : " " + unit);
     }
 
     private static String at(OptionalDouble omega) {
