@@ -20,6 +20,8 @@ import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
 import org.tracewell.core.Examples;
+import org.tracewell.report.ReportInput;
+import org.tracewell.report.ReportWriter;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.core.analysis.AnalysisCancelledException;
 import org.tracewell.core.analysis.AxisResult;
@@ -131,9 +133,8 @@ public final class AnalyzeCommand {
                     writeCsv(options.out().resolve(csvName(contour, run)), contour, run);
                 }
             }
-            // ---- HTML report: single call site for the report bundle (org.tracewell.report) ----
-            // ReportWriter did not exist when this command was written; wire it here:
-            //     org.tracewell.report.ReportWriter.write(review, options.out());
+            err.println("writing the design-review report");
+            ReportWriter.write(ReportInput.of(review, machine), options.out());
             if (options.json()) {
                 out.println(json);
             }

@@ -1,0 +1,259 @@
+package org.tracewell.charts;
+
+import java.awt.BasicStroke;
+import java.awt.Font;
+import java.awt.Shape;
+import java.awt.geom.Path2D;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.annotations.XYTextAnnotation;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * Circle-test polar plot (ISO 230-4 figures). Each run is drawn at radius R + m·(d − d_top) about the centre,
+ * d = ρ − R its radial deviation and d_top the outermost ring, so the radial deviation is magnified m times
+ * while angles stay true. Rings of equal deviation, labelled in µm, give the scale; the nominal circle (d = 0)
+ * is one of them unless the whole run lies so far to one side that showing it would flatten the shape — then
+ * the plot says so. Axis reversal points are marked on every run; G and F per run and G(b) sit in the middle.
+ */
+public final class CircleTestChart {
+
+    /** Points drawn per full turn of a ring. */
+    static final int RING_POINTS = 361;
+    /** Display points kept per run. */
+    static final int RUN_POINTS = 2000;
+    /** Share of the radius the band of rings takes. */
+    static final double BAND_FRACTION = 0.4;
+    /** The nominal circle is drawn when its distance from the runs is at most this many spreads. */
+    static final double NOMINAL_WITHIN_SPREADS = 3;
+
+    private CircleTestChart() {
+    }
+
+    /**
+     * @param nominalRadiusM R, metres, &gt; 0
+     * @param runs the runs, usually CW and CCW
+     * @param bidirectionalG G(b) of the runs together, metres; NaN when not evaluated
+     * @param reversals where axes reverse (marked on every run)
+     * @param uLabel and {@code vLabel}: names of the plane coordinates, e.g. "X", "Y"
+     * @return the chart; its scale is in {@link #scaleOf}
+     */
+    public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
+            List<ReversalPoint> reversals, String uLabel, String vLabel) {
+        if (!(nominalRadiusM > 0) || !Double.isFinite(nominalRadiusM)) {
+            throw new IllegalArgumentException("nominal radius must be finite and > 0 m, got " + nominalRadiusM);
+        }
+        if (runs.isEmpty()) {
+            throw new IllegalArgumentException("a circle-test plot needs at least one run");
+        }
+        Scale scale = scale(nominalRadiusM, runs);
+        double radiusMm = nominalRadiusM * 1e3;
+
+        XYSeriesCollection runData = new XYSeriesCollection();
+        XYSeries reversalSeries = new XYSeries("axis reversal", false, true);
+        for (CircleRun run : runs) {
+            XYSeries s = new XYSeries(run.label(), false, true);
+            int[] keep = ContourDeviationChart.displayIndices(run.radialDeviation(), RUN_POINTS);
+            for (int k : keep) {
+                double r = scale.drawnRadiusMm(radiusMm, run.radialDeviation()[k]);
+                s.add(r * Math.cos(run.angleRad()[k]), r * Math.sin(run.angleRad()[k]), false);
+            }
+            runData.addSeries(s);
+            if (run.angleRad().length > 0) {
+                for (ReversalPoint p : reversals) {
+                    double r = scale.drawnRadiusMm(radiusMm, run.deviationNear(p.angleRad()));
+                    reversalSeries.add(r * Math.cos(p.angleRad()), r * Math.sin(p.angleRad()), false);
+                }
+            }
+        }
+        XYSeriesCollection reversalData = new XYSeriesCollection(reversalSeries);
+
+        XYSeriesCollection rings = new XYSeriesCollection();
+        int nominalIndex = -1;
+        for (int i = 0; i <= scale.ringCount(); i++) {
+            double d = scale.ringValueM(i);
+            boolean nominal = Math.abs(d) < 1e-3 * scale.stepM();
+            String name = nominal ? "nominal circle R = " + Units.format3(radiusMm) + " mm"
+                    : ringLabel(d);
+            if (nominal) {
+                nominalIndex = i;
+            }
+            rings.addSeries(circle(name, scale.drawnRadiusMm(radiusMm, d)));
+        }
+
+        XYLineAndShapeRenderer runRenderer = BodeChart.lines();
+        XYLineAndShapeRenderer ringRenderer = BodeChart.lines();
+        ringRenderer.setDrawSeriesLineAsPath(true);
+        for (int i = 0; i < rings.getSeriesCount(); i++) {
+            boolean nominal = i == nominalIndex;
+            ringRenderer.setSeriesPaint(i, nominal ? ChartStyle.NOTE : ChartStyle.GRID);
+            ringRenderer.setSeriesStroke(i, nominal ? ChartStyle.LIMIT_STROKE : new BasicStroke(0.9f));
+            ringRenderer.setSeriesVisibleInLegend(i, nominal);
+        }
+        XYLineAndShapeRenderer reversalRenderer = new XYLineAndShapeRenderer(false, true);
+        reversalRenderer.setSeriesShape(0, triangle(5));
+        reversalRenderer.setSeriesPaint(0, ChartStyle.LIMIT);
+
+        // The plot is polar: positions off the circle mean nothing in mm, so no Cartesian axes are shown.
+        NumberAxis u = new NumberAxis(uLabel);
+        NumberAxis v = new NumberAxis(vLabel);
+        u.setVisible(false);
+        v.setVisible(false);
+        XYPlot plot = new XYPlot(runData, u, v, runRenderer);
+        plot.setDataset(1, reversalData);
+        plot.setRenderer(1, reversalRenderer);
+        plot.setDataset(2, rings);
+        plot.setRenderer(2, ringRenderer);
+        plot.setDomainGridlinesVisible(false);
+        plot.setRangeGridlinesVisible(false);
+        EqualAspect.apply(plot, 0.1, runData, rings);
+
+        double labelAngle = Math.toRadians(52);
+        for (int i = 0; i <= scale.ringCount(); i++) {
+            double r = scale.drawnRadiusMm(radiusMm, scale.ringValueM(i));
+            XYTextAnnotation ringLabel = new XYTextAnnotation(ringLabel(scale.ringValueM(i)),
+                    r * Math.cos(labelAngle), r * Math.sin(labelAngle));
+            ringLabel.setFont(ChartStyle.TICK_FONT);
+            ringLabel.setPaint(ChartStyle.NOTE);
+            ringLabel.setBackgroundPaint(ChartStyle.LABEL_BACKGROUND);
+            ringLabel.setTextAnchor(TextAnchor.CENTER);
+            plot.addAnnotation(ringLabel);
+        }
+        double outer = radiusMm * 1.06;
+        Set<String> labelled = new LinkedHashSet<>();
+        for (ReversalPoint p : reversals) {
+            if (labelled.add(p.label() + "@" + Math.round(Math.toDegrees(p.angleRad())))) {
+                XYTextAnnotation a = new XYTextAnnotation(p.label(), outer * Math.cos(p.angleRad()),
+                        outer * Math.sin(p.angleRad()));
+                a.setFont(ChartStyle.TICK_FONT);
+                a.setPaint(ChartStyle.LIMIT);
+                a.setBackgroundPaint(ChartStyle.LABEL_BACKGROUND);
+                plot.addAnnotation(a);
+            }
+        }
+        XYTextAnnotation directions = new XYTextAnnotation("+" + uLabel + " →   +" + vLabel + " ↑", radiusMm * 1.1,
+                -radiusMm * 1.1);
+        directions.setFont(ChartStyle.NOTE_FONT);
+        directions.setPaint(ChartStyle.INK);
+        directions.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
+        plot.addAnnotation(directions);
+
+        double lineHeight = radiusMm * 0.09;
+        int lineCount = runs.size() + (Double.isFinite(bidirectionalG) ? 1 : 0) + 1;
+        double y = lineHeight * (lineCount - 1) / 2.0;
+        for (CircleRun run : runs) {
+            plot.addAnnotation(centreText(run.label() + ":  G " + Units.format3(run.circularDeviationG() * 1e6)
+                    + " µm,  F " + Units.format3(run.radialDeviationF() * 1e6) + " µm", y, false));
+            y -= lineHeight;
+        }
+        if (Double.isFinite(bidirectionalG)) {
+            plot.addAnnotation(centreText("G(b) " + Units.format3(bidirectionalG * 1e6) + " µm", y, true));
+            y -= lineHeight;
+        }
+        plot.addAnnotation(centreText(scale.nominalShown() ? "rings every " + Units.format3(scale.stepM() * 1e6) + " µm"
+                : "nominal circle (0 µm) off scale; rings every " + Units.format3(scale.stepM() * 1e6) + " µm", y,
+                false));
+        String fullTitle = title + " — radial deviation " + Magnification.label(scale.magnification());
+        return ChartStyle.apply(new JFreeChart(fullTitle, ChartStyle.TITLE_FONT, plot, true));
+    }
+
+    /** The ring scale {@link #create} uses for these runs. */
+    public static Scale scaleOf(double nominalRadiusM, List<CircleRun> runs) {
+        return scale(nominalRadiusM, runs);
+    }
+
+    /**
+     * The radial scale of a plot.
+     *
+     * @param bottomM deviation of the innermost ring, metres
+     * @param stepM ring spacing, metres (1–2–5 series)
+     * @param ringCount rings above the innermost one
+     * @param magnification drawn millimetres per millimetre of deviation
+     * @param nominalShown whether the nominal circle (deviation 0) is one of the rings
+     */
+    public record Scale(double bottomM, double stepM, int ringCount, double magnification, boolean nominalShown) {
+
+        public double ringValueM(int i) {
+            return bottomM + i * stepM;
+        }
+
+        public double topM() {
+            return ringValueM(ringCount);
+        }
+
+        /** Drawn radius, mm, of a deviation: the outermost ring sits on the nominal radius. */
+        double drawnRadiusMm(double radiusMm, double deviationM) {
+            return radiusMm + magnification * (deviationM - topM()) * 1e3;
+        }
+    }
+
+    static Scale scale(double radiusM, List<CircleRun> runs) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (CircleRun run : runs) {
+            for (double d : run.radialDeviation()) {
+                lo = Math.min(lo, d);
+                hi = Math.max(hi, d);
+            }
+        }
+        if (!(hi >= lo)) {
+            lo = 0;
+            hi = 0;
+        }
+        double spread = Math.max(hi - lo, 1e-9); // 1 nm floor: a perfect run still gets a readable scale
+        double offset = lo > 0 ? lo : hi < 0 ? -hi : 0;
+        boolean nominal = offset <= NOMINAL_WITHIN_SPREADS * spread;
+        if (nominal) {
+            lo = Math.min(lo, 0);
+            hi = Math.max(hi, 0);
+        }
+        double step = Magnification.floorOneTwoFive(Math.max(hi - lo, 1e-9) / 3);
+        double bottom = Math.floor(lo / step - 1e-9) * step;
+        int count = (int) Math.max(1, Math.ceil((hi - bottom) / step - 1e-9));
+        double band = count * step;
+        double magnification = Magnification.floorOneTwoFive(BAND_FRACTION * radiusM / band);
+        return new Scale(bottom, step, count, Math.max(1, magnification), nominal);
+    }
+
+    private static String ringLabel(double deviationM) {
+        double um = deviationM * 1e6;
+        if (Math.abs(um) < 1e-9) {
+            return "0 µm";
+        }
+        return (um > 0 ? "+" : "−") + Units.format3(Math.abs(um)) + " µm";
+    }
+
+    private static XYTextAnnotation centreText(String text, double y, boolean bold) {
+        XYTextAnnotation a = new XYTextAnnotation(text, 0, y);
+        a.setFont(bold ? ChartStyle.NOTE_FONT.deriveFont(Font.BOLD) : ChartStyle.NOTE_FONT);
+        a.setPaint(ChartStyle.INK);
+        a.setTextAnchor(TextAnchor.CENTER);
+        return a;
+    }
+
+    private static XYSeries circle(String name, double radius) {
+        XYSeries s = new XYSeries(name, false, true);
+        for (int i = 0; i < RING_POINTS; i++) {
+            double a = 2 * Math.PI * i / (RING_POINTS - 1);
+            s.add(radius * Math.cos(a), radius * Math.sin(a), false);
+        }
+        return s;
+    }
+
+    private static Shape triangle(double half) {
+        Path2D.Double p = new Path2D.Double();
+        p.moveTo(0, -half);
+        p.lineTo(half, half);
+        p.lineTo(-half, half);
+        p.closePath();
+        return p;
+    }
+}
