@@ -45,7 +45,7 @@ public final class RequirementEvaluator {
     public static RequirementReport evaluate(Machine machine, MachineAnalysis analysis, MachineBudget budget) {
         List<RequirementResult> results = new ArrayList<>();
         for (Requirement r : machine.getRequirements()) {
-            results.add(evaluate(r, machine, analysis));
+            results.add(evaluate(r, machine, analysis, budget.forRequirement(r.getId())));
         }
         List<CoverageFinding> coverage = coverage(machine, results);
         List<RequirementApportionment> apportionments = new ArrayList<>();
@@ -60,7 +60,14 @@ public final class RequirementEvaluator {
 
     // ------------------------------------------------------------------------------------------------ evaluation
 
-    static RequirementResult evaluate(Requirement r, Machine machine, MachineAnalysis analysis) {
+    /**
+     * A contour requirement with an error budget is verified by the simulated servo figure of every run AND by the
+     * budget total, which rolls every contributor (servo, mismatch, geometric, thermal, quantisation…) up in the
+     * budget's method: the worse of them is the requirement's value, so a budget that overruns the target can never
+     * hide behind a small servo-only figure.
+     */
+    static RequirementResult evaluate(Requirement r, Machine machine, MachineAnalysis analysis,
+            Optional<org.tracewell.core.analysis.RequirementBudget> budget) {
         String kind = r.getKind().getLiteral();
         String metric = r.getKind() == RequirementKind.CONTOUR_DEVIATION ? r.getMetric().getLiteral() : "";
         String siUnit = siUnit(r.getKind());
@@ -90,6 +97,9 @@ public final class RequirementEvaluator {
                                 run.direction().label(), metricLabel(r.getMetric()), v));
                     }
                 }
+                budget.ifPresent(b -> verifications.add(new Verification("budget", b.requirementId(),
+                        "error budget", "", "total, " + b.evaluation().method().displayName(),
+                        OptionalDouble.of(b.evaluation().total()))));
             }
             case FOLLOWING_ERROR, STEADY_STATE_ERROR -> {
                 if (axis.isEmpty()) {
