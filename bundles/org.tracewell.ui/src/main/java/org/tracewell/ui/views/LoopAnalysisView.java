@@ -75,6 +75,8 @@ public final class LoopAnalysisView extends ViewPart {
     private Text feedbackDenominator;
     private Text deadTimeMs;
     private Label title;
+    private Composite form;
+    private Button typeOwn;
     private Label message;
     private Table table;
     private ChartCanvas bode;
@@ -105,12 +107,24 @@ public final class LoopAnalysisView extends ViewPart {
     public void createPartControl(Composite parent) {
         parent.setLayout(new GridLayout(1, false));
 
-        title = new Label(parent, SWT.NONE);
+        Composite heading = new Composite(parent, SWT.NONE);
+        heading.setLayout(new GridLayout(2, false));
+        heading.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        title = new Label(heading, SWT.NONE);
         title.setFont(JFaceResources.getBannerFont());
         title.setText(TYPED_TITLE);
-        title.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
+        title.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        // A model loop hides the coefficient fields (they would show a different loop); this brings them back.
+        typeOwn = new Button(heading, SWT.PUSH);
+        typeOwn.setText("Type a loop…");
+        typeOwn.setToolTipText("Analyse a loop typed as transfer-function coefficients instead of the selected axis");
+        typeOwn.setVisible(false);
+        typeOwn.addListener(SWT.Selection, e -> {
+            follow(null);
+            schedule(0);
+        });
 
-        Composite form = new Composite(parent, SWT.NONE);
+        form = new Composite(parent, SWT.NONE);
         form.setLayout(new GridLayout(6, false));
         form.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         // Invented demo loop (LM-3020 Y bridge): Kv = 50 1/s around a 3 ms velocity-loop lag.
@@ -253,6 +267,7 @@ public final class LoopAnalysisView extends ViewPart {
             display.asyncExec(() -> {
                 if (mine == generation.get() && !table.isDisposed()) {
                     title.setText(loopTitle);
+                    showTypedFields(false);
                     show(result);
                 }
             });
@@ -264,6 +279,7 @@ public final class LoopAnalysisView extends ViewPart {
 
     private void showRejected(String loopTitle, String reason) {
         title.setText(loopTitle);
+        showTypedFields(false);
         show(new Outcome(null, null, null, null, reason));
     }
 
@@ -286,6 +302,16 @@ public final class LoopAnalysisView extends ViewPart {
         return canvas;
     }
 
+    private void showTypedFields(boolean typed) {
+        if (form.getVisible() == typed) {
+            return;
+        }
+        form.setVisible(typed);
+        ((GridData) form.getLayoutData()).exclude = !typed;
+        typeOwn.setVisible(!typed);
+        form.getParent().layout(true, true);
+    }
+
     /** Reads the fields on the UI thread, analyses in a job, shows the newest result only. */
     private void schedule(long delayMs) {
         String num = numerator.getText();
@@ -303,6 +329,7 @@ public final class LoopAnalysisView extends ViewPart {
             display.asyncExec(() -> {
                 if (mine == generation.get() && !table.isDisposed()) {
                     title.setText(TYPED_TITLE);
+                    showTypedFields(true);
                     show(outcome);
                 }
             });
