@@ -150,14 +150,14 @@ public final class LoopAnalysisView extends ViewPart {
         for (String title : new String[] {"Quantity", "Value"}) {
             TableColumn column = new TableColumn(table, SWT.LEFT);
             column.setText(title);
-            column.setWidth(title.equals("Quantity") ? 190 : 330);
+            column.setWidth(title.equals("Quantity") ? 175 : 330);
         }
         CTabFolder tabs = new CTabFolder(sash, SWT.BORDER | SWT.BOTTOM);
         bode = tab(tabs, "Bode");
         step = tab(tabs, "Step response");
         poles = tab(tabs, "Closed-loop poles");
         tabs.setSelection(0);
-        sash.setWeights(42, 58);
+        sash.setWeights(52, 48);
 
         Label caution = new Label(parent, SWT.WRAP);
         caution.setText("Caution: " + SafetyCaution.SHORT);
