@@ -31,12 +31,15 @@ public final class AxisDesignPerspective implements IPerspectiveFactory {
         right.addPlaceholder(CONTOUR_DEVIATION_VIEW);
 
         IFolderLayout bottom = layout.createFolder("org.tracewell.ui.folder.bottom", IPageLayout.BOTTOM, 0.65f, editorArea);
+        // Requirement Trace first so it is the tab on top; Error Budget beside it shows the same review.
+        bottom.addView(REQUIREMENT_TRACE_VIEW);
+        bottom.addView(ERROR_BUDGET_VIEW);
         bottom.addPlaceholder(TRACKING_VIEW);
-        bottom.addPlaceholder(ERROR_BUDGET_VIEW);
-        bottom.addPlaceholder(REQUIREMENT_TRACE_VIEW);
         bottom.addPlaceholder(IPageLayout.ID_PROBLEM_VIEW);
         bottom.addPlaceholder(IPageLayout.ID_PROP_SHEET);
 
         layout.addShowViewShortcut(LOOP_ANALYSIS_VIEW);
+        layout.addShowViewShortcut(REQUIREMENT_TRACE_VIEW);
+        layout.addShowViewShortcut(ERROR_BUDGET_VIEW);
     }
 }

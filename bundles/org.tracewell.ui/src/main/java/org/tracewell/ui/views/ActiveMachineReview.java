@@ -1,0 +1,225 @@
+package org.tracewell.ui.views;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Instant;
+import java.util.HashMap;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Consumer;
+
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.ListenerList;
+import org.eclipse.core.runtime.Status;
+import org.eclipse.core.runtime.jobs.Job;
+import org.eclipse.emf.common.command.CommandStackListener;
+import org.eclipse.emf.ecore.util.EcoreUtil;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.ui.IPartListener2;
+import org.eclipse.ui.IWorkbenchPage;
+import org.eclipse.ui.IWorkbenchPartReference;
+import org.tracewell.core.analysis.AnalysisCancelledException;
+import org.tracewell.core.analysis.CancellationFlag;
+import org.tracewell.core.analysis.MachineBudget;
+import org.tracewell.core.analysis.MachineBudgets;
+import org.tracewell.core.analysis.ProgressListener;
+import org.tracewell.core.mapping.MappingException;
+import org.tracewell.model.Machine;
+import org.tracewell.requirements.DesignReview;
+import org.tracewell.requirements.ReviewProvenance;
+import org.tracewell.requirements.ReviewResults;
+import org.tracewell.ui.ProductInfo;
+import org.tracewell.ui.editor.MachineEditor;
+import org.tracewell.ui.editor.MachineEditorInput;
+
+/**
+ * The design review of the machine in the page's active Machine Editor, shared by the views that show it (Requirement
+ * Trace, Error Budget), so one edit runs one review. Follows part activation; re-runs the review in a job a short
+ * pause after the editor's command stack changes (edit, undo, redo); only the newest review is published.
+ * Used on the UI thread only; listeners are called there.
+ */
+final class ActiveMachineReview {
+
+    /** Pause after the last model change before reviewing, ms: folds a burst of edits into one (slow) review. */
+    static final int DEBOUNCE_MS = 300;
+
+    private static final Map<IWorkbenchPage, ActiveMachineReview> BY_PAGE = new HashMap<>();
+
+    /**
+     * What the views show.
+     *
+     * @param machineName name of the reviewed machine; empty when no Machine Editor is active
+     * @param results     the review; null when there is none (no machine, or it could not be reviewed)
+     * @param problem     why there is no review (empty while none was asked for)
+     * @param running     true while a newer review is on its way
+     */
+    record Outcome(String machineName, ReviewResults results, String problem, boolean running) {
+    }
+
+    private final IWorkbenchPage page;
+    private final Display display;
+    private final ListenerList<Consumer<Outcome>> listeners = new ListenerList<>();
+    private final AtomicLong generation = new AtomicLong();
+    private final CommandStackListener stackListener = event -> schedule(DEBOUNCE_MS);
+    private final IPartListener2 partListener = new IPartListener2() {
+        @Override
+        public void partActivated(IWorkbenchPartReference ref) {
+            if (ref.getPart(false) instanceof MachineEditor editor) {
+                follow(editor);
+            }
+        }
+
+        @Override
+        public void partClosed(IWorkbenchPartReference ref) {
+            if (ref.getPart(false) == followed) {
+                follow(page.getActiveEditor() instanceof MachineEditor other && other != followed ? other : null);
+            }
+        }
+    };
+    private MachineEditor followed;
+    private CancellationFlag running = CancellationFlag.create();
+    private Outcome latest = new Outcome("", null, "Open a machine in the Machine Editor to review it.", false);
+
+    private ActiveMachineReview(IWorkbenchPage page) {
+        this.page = page;
+        this.display = page.getWorkbenchWindow().getShell().getDisplay();
+        page.addPartListener(partListener);
+        if (page.getActiveEditor() instanceof MachineEditor editor) {
+            follow(editor);
+        }
+    }
+
+    /** Subscribes {@code listener} to the review of {@code page}'s active machine; it gets the latest at once. */
+    static ActiveMachineReview subscribe(IWorkbenchPage page, Consumer<Outcome> listener) {
+        ActiveMachineReview review = BY_PAGE.computeIfAbsent(page, ActiveMachineReview::new);
+        review.listeners.add(listener);
+        listener.accept(review.latest);
+        return review;
+    }
+
+    /** Ends the subscription; the last one stops following the editor. */
+    void unsubscribe(Consumer<Outcome> listener) {
+        listeners.remove(listener);
+        if (listeners.isEmpty()) {
+            follow(null);
+            page.removePartListener(partListener);
+            BY_PAGE.remove(page);
+        }
+    }
+
+    /** The Machine Editor whose machine is reviewed, or null. */
+    MachineEditor followedEditor() {
+        return followed;
+    }
+
+    private void follow(MachineEditor editor) {
+        if (editor == followed) {
+            return;
+        }
+        if (followed != null && followed.getEditingDomain() != null) {
+            followed.getEditingDomain().getCommandStack().removeCommandStackListener(stackListener);
+        }
+        followed = editor;
+        if (editor == null) {
+            generation.incrementAndGet();
+            running.cancel();
+            publish(new Outcome("", null, "Open a machine in the Machine Editor to review it.", false));
+            return;
+        }
+        editor.getEditingDomain().getCommandStack().addCommandStackListener(stackListener);
+        // The previous machine's review must not stay on screen under this one's name.
+        publish(new Outcome(editor.getPartName(), null, "", true));
+        schedule(0);
+    }
+
+    /**
+     * Copies the machine on the UI thread (the model is only changed there) after {@code delayMs}, then reviews the
+     * copy in a job. Library axes are referenced, not copied: the editor changes them only on the UI thread too, by
+     * whole-value commands.
+     */
+    private void schedule(int delayMs) {
+        long mine = generation.incrementAndGet();
+        running.cancel();
+        display.timerExec(delayMs, () -> {
+            MachineEditor editor = followed;
+            if (mine != generation.get() || editor == null) {
+                return;
+            }
+            if (!(editor.model().root() instanceof Machine machine)) {
+                publish(new Outcome(editor.getPartName(), null, editor.getPartName()
+                        + " holds a single axis, not a machine; open a .machine file to review requirements.", false));
+                return;
+            }
+            String name = machine.getName() == null ? editor.getPartName() : machine.getName();
+            Machine copy = EcoreUtil.copy(machine);
+            Path file = editor.getEditorInput() instanceof MachineEditorInput input ? input.file() : null;
+            boolean dirty = editor.isDirty();
+            CancellationFlag cancel = CancellationFlag.create();
+            running = cancel;
+            publish(new Outcome(name, latest.results(), latest.problem(), true));
+            Job job = Job.create("Design review: " + name, (IProgressMonitor monitor) -> {
+                if (mine != generation.get() || monitor.isCanceled()) {
+                    return Status.CANCEL_STATUS;
+                }
+                Outcome outcome;
+                try {
+                    ReviewResults results = DesignReview.run(copy, provenance(file, dirty), ProgressListener.SILENT,
+                            cancel);
+                    outcome = new Outcome(name, results, "", false);
+                } catch (AnalysisCancelledException superseded) {
+                    return Status.CANCEL_STATUS;
+                } catch (MappingException e) {
+                    outcome = new Outcome(name, null, "Not reviewed: element " + e.getMessage(), false);
+                } catch (IllegalArgumentException | ArithmeticException e) {
+                    outcome = new Outcome(name, null, "Not reviewed: " + e.getMessage(), false);
+                }
+                Outcome result = outcome;
+                display.asyncExec(() -> {
+                    if (mine == generation.get()) {
+                        publish(result);
+                    }
+                });
+                return Status.OK_STATUS;
+            });
+            job.setSystem(true);
+            job.schedule();
+        });
+    }
+
+    private void publish(Outcome outcome) {
+        latest = outcome;
+        for (Consumer<Outcome> listener : listeners) {
+            listener.accept(outcome);
+        }
+    }
+
+    /** The settings line up with those {@code tracewell analyze} states, so a view and a report read alike. */
+    private static ReviewProvenance provenance(Path file, boolean dirty) {
+        List<String> settings = List.of(
+                "combination: " + MachineBudgets.DEFAULT_METHOD.printable(),
+                "reserve held back from each contour requirement: "
+                        + Math.round(MachineBudget.RESERVE_FRACTION * 100) + " %",
+                "coverage factor of random lines: k = 2",
+                "contours simulated with each axis's linear closed loop at the contour's sample period",
+                dirty ? "reviewed with the editor's unsaved changes (the hash is that of the saved file)"
+                        : "reviewed as saved");
+        return new ReviewProvenance(ProductInfo.version(), file == null ? "" : file.getFileName().toString(),
+                sha256(file), Instant.now(), List.of(), settings);
+    }
+
+    private static String sha256(Path file) {
+        if (file == null) {
+            return "";
+        }
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(file)));
+        } catch (IOException | NoSuchAlgorithmException e) {
+            return ""; // the hash only documents the review; a file being rewritten must not stop it
+        }
+    }
+}
