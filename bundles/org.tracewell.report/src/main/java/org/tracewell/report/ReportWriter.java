@@ -9,6 +9,10 @@ import java.util.ArrayList;
 import java.util.Base64;
 import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 
 import org.jfree.chart.JFreeChart;
 import org.tracewell.requirements.ReviewResults;
@@ -52,24 +56,48 @@ public final class ReportWriter {
             Files.createDirectories(chartDir);
             removeOldCharts(chartDir);
         }
+        // Charts are independent: draw and encode them on every core while the page is laid out; names are
+        // handed out in page order, so the output stays byte-for-byte the same.
+        ExecutorService painters = Executors.newFixedThreadPool(Math.max(1, Runtime.getRuntime().availableProcessors()));
+        List<Future<?>> pending = new ArrayList<>();
         ReportPage.ChartSink sink = new ReportPage.ChartSink() {
             private int sequence;
 
             @Override
             public String add(String slug, JFreeChart chart, int widthPx, int heightPx) throws IOException {
-                byte[] png = ChartImages.png(chart, widthPx, heightPx);
                 if (mode == ImageMode.EMBEDDED) {
+                    byte[] png = ChartImages.png(chart, widthPx, heightPx);
                     return "data:image/png;base64," + Base64.getEncoder().encodeToString(png);
                 }
                 sequence++;
                 String name = String.format(Locale.ROOT, "%02d-%s.png", sequence, fileSlug(slug));
                 Path file = chartDir.resolve(name);
-                Files.write(file, png);
+                pending.add(painters.submit(() -> {
+                    Files.write(file, ChartImages.png(chart, widthPx, heightPx));
+                    return null;
+                }));
                 written.add(file);
                 return CHARTS + "/" + name;
             }
         };
-        String html = new ReportPage(input, sink).render();
+        String html;
+        try {
+            html = new ReportPage(input, sink).render();
+            for (Future<?> chart : pending) {
+                chart.get();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("interrupted while drawing the report's charts", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            throw new IOException("a report chart could not be drawn: " + cause, cause);
+        } finally {
+            painters.shutdownNow();
+        }
         Path index = outDir.resolve(INDEX);
         // Written beside and moved into place, so a reader never sees half a page.
         Path partial = outDir.resolve(INDEX + ".partial");
