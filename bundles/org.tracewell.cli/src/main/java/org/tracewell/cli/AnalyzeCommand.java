@@ -3,6 +3,7 @@ package org.tracewell.cli;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.PrintStream;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -14,6 +15,8 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
@@ -125,6 +128,16 @@ public final class AnalyzeCommand {
         }
         try {
             Files.createDirectories(options.out());
+            // The report (charts, mostly) is the slowest part: draw it while the JSON and CSV files are written.
+            err.println("writing the design-review report");
+            ReportInput reportInput = ReportInput.of(review, machine);
+            CompletableFuture<List<Path>> report = CompletableFuture.supplyAsync(() -> {
+                try {
+                    return ReportWriter.write(reportInput, options.out());
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
             String json = new GsonBuilder().setPrettyPrinting().serializeNulls().serializeSpecialFloatingPointValues()
                     .disableHtmlEscaping().create().toJson(ResultsJson.of(review));
             Files.writeString(options.out().resolve("results.json"), json + "\n", StandardCharsets.UTF_8);
@@ -133,8 +146,14 @@ public final class AnalyzeCommand {
                     writeCsv(options.out().resolve(csvName(contour, run)), contour, run);
                 }
             }
-            err.println("writing the design-review report");
-            ReportWriter.write(ReportInput.of(review, machine), options.out());
+            try {
+                report.join();
+            } catch (CompletionException e) {
+                if (e.getCause() instanceof UncheckedIOException io) {
+                    throw io.getCause();
+                }
+                throw e;
+            }
             if (options.json()) {
                 out.println(json);
             }
