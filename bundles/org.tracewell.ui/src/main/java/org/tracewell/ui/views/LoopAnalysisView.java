@@ -247,34 +247,43 @@ public final class LoopAnalysisView extends ViewPart {
     }
 
     private void run(long mine, String loopTitle, Supplier<LoopAnalysis> analysis) {
+        submit(mine, 0, loopTitle, false, () -> {
+            try {
+                long started = System.nanoTime();
+                LoopAnalysis result = analysis.get();
+                long analysed = System.nanoTime();
+                Outcome outcome = withCharts(result);
+                lastAnalysisNanos = analysed - started;
+                lastChartsNanos = System.nanoTime() - analysed;
+                return outcome;
+            } catch (IllegalArgumentException | ArithmeticException e) {
+                return new Outcome(null, null, null, null, e.getMessage());
+            }
+        });
+    }
+
+    /**
+     * The one way work reaches the screen: {@code work} runs in a job after {@code delayMs}; its outcome is shown
+     * on the UI thread only if no newer request ({@code generation}) has come in meanwhile.
+     */
+    private void submit(long mine, long delayMs, String loopTitle, boolean typed, Supplier<Outcome> work) {
         Display display = table.getDisplay();
         Job job = Job.create("Loop analysis: " + loopTitle, (IProgressMonitor monitor) -> {
             if (mine != generation.get() || monitor.isCanceled()) {
                 return Status.CANCEL_STATUS;
             }
-            Outcome outcome;
-            try {
-                long started = System.nanoTime();
-                LoopAnalysis result = analysis.get();
-                long analysed = System.nanoTime();
-                outcome = withCharts(result);
-                lastAnalysisNanos = analysed - started;
-                lastChartsNanos = System.nanoTime() - analysed;
-            } catch (IllegalArgumentException | ArithmeticException e) {
-                outcome = new Outcome(null, null, null, null, e.getMessage());
-            }
-            Outcome result = outcome;
+            Outcome outcome = work.get();
             display.asyncExec(() -> {
                 if (mine == generation.get() && !table.isDisposed()) {
                     title.setText(loopTitle);
-                    showTypedFields(false);
-                    show(result);
+                    showTypedFields(typed);
+                    show(outcome);
                 }
             });
             return Status.OK_STATUS;
         });
         job.setSystem(true);
-        job.schedule();
+        job.schedule(delayMs);
     }
 
     private void showRejected(String loopTitle, String reason) {
@@ -319,24 +328,7 @@ public final class LoopAnalysisView extends ViewPart {
         String fbNum = feedbackNumerator.getText();
         String fbDen = feedbackDenominator.getText();
         String delay = deadTimeMs.getText();
-        long mine = generation.incrementAndGet();
-        Display display = numerator.getDisplay();
-        Job job = Job.create("Loop analysis", (IProgressMonitor monitor) -> {
-            if (mine != generation.get() || monitor.isCanceled()) {
-                return Status.CANCEL_STATUS;
-            }
-            Outcome outcome = compute(num, den, fbNum, fbDen, delay);
-            display.asyncExec(() -> {
-                if (mine == generation.get() && !table.isDisposed()) {
-                    title.setText(TYPED_TITLE);
-                    showTypedFields(true);
-                    show(outcome);
-                }
-            });
-            return Status.OK_STATUS;
-        });
-        job.setSystem(true);
-        job.schedule(delayMs);
+        submit(generation.incrementAndGet(), delayMs, TYPED_TITLE, true, () -> compute(num, den, fbNum, fbDen, delay));
     }
 
     /** Pure: text in, analysis and charts (or the reason for rejecting the input) out. */
