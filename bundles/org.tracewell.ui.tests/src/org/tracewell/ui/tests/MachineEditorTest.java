@@ -127,7 +127,7 @@ class MachineEditorTest {
         assertTrue(editor.reveal(controller));
         ModelPage axes = editor.pages().get(0);
         Text field = (Text) axes.form().field(Literals.CASCADE_CONTROLLER__POSITION_GAIN).orElseThrow();
-        assertEquals(org.tracewell.model.units.TradeUnits.format(kv, "(m/min)/mm"), field.getText());
+        assertEquals(org.tracewell.model.units.UnitTable.format(kv, "(m/min)/mm"), field.getText());
 
         field.setText("fast");
         field.notifyListeners(SWT.DefaultSelection, new Event());

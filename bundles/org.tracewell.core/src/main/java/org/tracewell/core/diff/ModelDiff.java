@@ -132,7 +132,7 @@ public final class ModelDiff {
     private static String showValue(EObject owner, EStructuralFeature feature, Object value) {
         if (value instanceof Double d) {
             String unit = UnitAnnotations.displayUnit(owner, feature);
-            return unit.isEmpty() ? org.tracewell.model.units.TradeUnits.formatNumber(d, 0)
+            return unit.isEmpty() ? org.tracewell.model.units.UnitTable.formatNumber(d, 0)
                     : UnitAnnotations.formatValue(owner, feature, d);
         }
         if (value instanceof EEnumLiteral literal) {

@@ -52,7 +52,7 @@ import org.tracewell.model.TransferFunctionController;
 import org.tracewell.model.TransferFunctionPlant;
 import org.tracewell.model.TwoMassDrive;
 import org.tracewell.model.units.TradeUnit;
-import org.tracewell.model.units.TradeUnits;
+import org.tracewell.model.units.UnitTable;
 import org.tracewell.model.units.UnitAnnotations;
 
 /**
@@ -280,7 +280,7 @@ public class TracewellValidator extends EObjectValidator {
                         && c.getPositionSamplePeriod() > m.getInterpolationPeriod()) {
                     warning(SAMPLE_PERIOD, "interpolation period " + value(Literals.MACHINE__INTERPOLATION_PERIOD)
                             + " is shorter than the position sample period "
-                            + TradeUnits.format(c.getPositionSamplePeriod(), "ms") + " of " + describe(axis)
+                            + UnitTable.format(c.getPositionSamplePeriod(), "ms") + " of " + describe(axis)
                             + "; valid: interpolation period ≥ every position sample period",
                             Literals.MACHINE__INTERPOLATION_PERIOD);
                 }
@@ -427,8 +427,8 @@ public class TracewellValidator extends EObjectValidator {
                     && c.getPositionGain() * c.getPositionSamplePeriod() > MAX_KV_TIMES_SAMPLE_PERIOD) {
                 error(SAMPLE_PERIOD, "position sample period " + value(Literals.CASCADE_CONTROLLER__POSITION_SAMPLE_PERIOD)
                         + " is too long for the position loop time constant 1/Kv = "
-                        + TradeUnits.format(1.0 / c.getPositionGain(), "ms") + "; valid: ≤ "
-                        + TradeUnits.format(MAX_KV_TIMES_SAMPLE_PERIOD / c.getPositionGain(), "ms")
+                        + UnitTable.format(1.0 / c.getPositionGain(), "ms") + "; valid: ≤ "
+                        + UnitTable.format(MAX_KV_TIMES_SAMPLE_PERIOD / c.getPositionGain(), "ms")
                         + " (Kv·T ≤ " + MAX_KV_TIMES_SAMPLE_PERIOD + ")",
                         Literals.CASCADE_CONTROLLER__POSITION_SAMPLE_PERIOD);
             }
@@ -436,7 +436,7 @@ public class TracewellValidator extends EObjectValidator {
                     && c.getVelocityIntegralTime() < MIN_INTEGRAL_TIME_IN_SAMPLES * c.getVelocitySamplePeriod()) {
                 error(SAMPLE_PERIOD, "velocity sample period " + value(Literals.CASCADE_CONTROLLER__VELOCITY_SAMPLE_PERIOD)
                         + " is too long for the integral time " + value(Literals.CASCADE_CONTROLLER__VELOCITY_INTEGRAL_TIME)
-                        + "; valid: ≤ " + TradeUnits.format(c.getVelocityIntegralTime() / MIN_INTEGRAL_TIME_IN_SAMPLES, "ms"),
+                        + "; valid: ≤ " + UnitTable.format(c.getVelocityIntegralTime() / MIN_INTEGRAL_TIME_IN_SAMPLES, "ms"),
                         Literals.CASCADE_CONTROLLER__VELOCITY_SAMPLE_PERIOD);
             }
             if (velocity) {
@@ -444,9 +444,9 @@ public class TracewellValidator extends EObjectValidator {
                 for (FilterStage stage : c.getFilterStages()) {
                     double highest = highestFrequency(stage);
                     if (highest >= nyquist) {
-                        error(SAMPLE_PERIOD, describe(stage) + " acts at " + TradeUnits.format(highest, "Hz")
-                                + ", at or above the Nyquist frequency " + TradeUnits.format(nyquist, "Hz")
-                                + " of the velocity loop; valid: below " + TradeUnits.format(nyquist, "Hz"),
+                        error(SAMPLE_PERIOD, describe(stage) + " acts at " + UnitTable.format(highest, "Hz")
+                                + ", at or above the Nyquist frequency " + UnitTable.format(nyquist, "Hz")
+                                + " of the velocity loop; valid: below " + UnitTable.format(nyquist, "Hz"),
                                 Literals.CASCADE_CONTROLLER__FILTER_STAGES);
                     }
                 }
@@ -537,9 +537,9 @@ public class TracewellValidator extends EObjectValidator {
                             error(GEOMETRY, describe(a) + " has its centre on its start point " + point(c, x, y)
                                     + "; expected a radius > 0", Literals.CONTOUR__SEGMENTS);
                         } else if (Math.abs(r0 - r1) > ARC_RADIUS_TOLERANCE) {
-                            error(GEOMETRY, describe(a) + " starts at radius " + TradeUnits.format(r0, "mm")
-                                    + " but ends at radius " + TradeUnits.format(r1, "mm") + "; valid: equal within "
-                                    + TradeUnits.format(ARC_RADIUS_TOLERANCE, "µm"), Literals.CONTOUR__SEGMENTS);
+                            error(GEOMETRY, describe(a) + " starts at radius " + UnitTable.format(r0, "mm")
+                                    + " but ends at radius " + UnitTable.format(r1, "mm") + "; valid: equal within "
+                                    + UnitTable.format(ARC_RADIUS_TOLERANCE, "µm"), Literals.CONTOUR__SEGMENTS);
                         }
                         x = a.getEndX();
                         y = a.getEndY();
@@ -559,7 +559,7 @@ public class TracewellValidator extends EObjectValidator {
         }
 
         private static String point(Contour c, double x, double y) {
-            return "(" + TradeUnits.formatNumber(x * 1e3, 0) + ", " + TradeUnits.formatNumber(y * 1e3, 0) + ") mm";
+            return "(" + UnitTable.formatNumber(x * 1e3, 0) + ", " + UnitTable.formatNumber(y * 1e3, 0) + ") mm";
         }
 
         private void requirement(Requirement r) {
@@ -578,7 +578,7 @@ public class TracewellValidator extends EObjectValidator {
                 error(UNIT, "has no unit; expected a display unit for " + words(r.getKind().getLiteral()) + " such as "
                         + String.join(", ", compatibleUnits(siUnit)), Literals.REQUIREMENT__DISPLAY_UNIT);
             } else {
-                TradeUnit unit = TradeUnits.find(displayUnit).orElse(null);
+                TradeUnit unit = UnitTable.find(displayUnit).orElse(null);
                 if (unit == null || !unit.siSymbol().equals(siUnit)) {
                     error(UNIT, "unit '" + displayUnit + "' does not measure " + words(r.getKind().getLiteral())
                             + "; valid: " + String.join(", ", compatibleUnits(siUnit)), Literals.REQUIREMENT__DISPLAY_UNIT);
@@ -686,8 +686,8 @@ public class TracewellValidator extends EObjectValidator {
             if (!inside) {
                 String display = displayUnit(attribute);
                 error(OUT_OF_RANGE, words(attribute.getName()) + " = " + value(attribute) + "; valid range: "
-                        + (lowIncluded ? "[" : "(") + TradeUnits.format(low, display) + " … "
-                        + TradeUnits.format(high, display) + (highIncluded ? "]" : ")")
+                        + (lowIncluded ? "[" : "(") + UnitTable.format(low, display) + " … "
+                        + UnitTable.format(high, display) + (highIncluded ? "]" : ")")
                         + (why == null ? "" : " (" + why + ")"), attribute);
             }
         }
@@ -698,18 +698,18 @@ public class TracewellValidator extends EObjectValidator {
         }
 
         private String value(EAttribute attribute) {
-            return TradeUnits.format(number(attribute), displayUnit(attribute));
+            return UnitTable.format(number(attribute), displayUnit(attribute));
         }
 
         private String zero(EAttribute attribute) {
-            return TradeUnits.format(0.0, displayUnit(attribute));
+            return UnitTable.format(0.0, displayUnit(attribute));
         }
 
         /** The declared display unit; a requirement's limit is shown in the requirement's own (valid) unit. */
         private String displayUnit(EAttribute attribute) {
             if (attribute == Literals.REQUIREMENT__LIMIT && element instanceof Requirement r) {
                 String si = siUnitOf(r);
-                return TradeUnits.find(r.getDisplayUnit()).filter(u -> u.siSymbol().equals(si))
+                return UnitTable.find(r.getDisplayUnit()).filter(u -> u.siSymbol().equals(si))
                         .map(TradeUnit::symbol).orElse(si);
             }
             return UnitAnnotations.displayUnit(element, attribute);
@@ -777,6 +777,6 @@ public class TracewellValidator extends EObjectValidator {
     }
 
     private static List<String> compatibleUnits(String siUnit) {
-        return TradeUnits.symbols().stream().filter(s -> TradeUnits.get(s).siSymbol().equals(siUnit)).toList();
+        return UnitTable.symbols().stream().filter(s -> UnitTable.get(s).siSymbol().equals(siUnit)).toList();
     }
 }

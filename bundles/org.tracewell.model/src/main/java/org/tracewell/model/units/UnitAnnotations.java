@@ -30,7 +30,7 @@ public final class UnitAnnotations {
 
     /** Formats the owner's value of a numeric attribute in its display unit. */
     public static String formatValue(EObject owner, EStructuralFeature feature, double siValue) {
-        return TradeUnits.format(siValue, displayUnit(owner, feature));
+        return UnitTable.format(siValue, displayUnit(owner, feature));
     }
 
     /** True when the element belongs to a rotary axis (its quantities are angles rather than lengths). */

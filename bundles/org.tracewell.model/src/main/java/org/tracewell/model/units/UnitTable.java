@@ -12,7 +12,7 @@ import java.util.Set;
  * The one table of units Tracewell knows, and the one way numbers are printed with them. The model stores SI; this
  * class is used at the edges (labels, command line, report, diffs, validation messages) to show trade units.
  */
-public final class TradeUnits {
+public final class UnitTable {
 
     /** Significant digits used when printing a value: enough for engineering review, few enough to read. */
     public static final int SIGNIFICANT_DIGITS = 4;
@@ -40,7 +40,7 @@ public final class TradeUnits {
         si("m/rad"); add("mm/rev", "m/rad", 1e-3 / (2.0 * Math.PI));
     }
 
-    private TradeUnits() {
+    private UnitTable() {
     }
 
     private static void si(String symbol) {

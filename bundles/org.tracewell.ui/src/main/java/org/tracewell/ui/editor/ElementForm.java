@@ -31,7 +31,7 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Text;
-import org.tracewell.model.units.TradeUnits;
+import org.tracewell.model.units.UnitTable;
 import org.tracewell.model.units.UnitAnnotations;
 
 /**
@@ -350,7 +350,7 @@ public final class ElementForm {
             if (si.isEmpty() || si.equals(display) || feature.isMany() || !(owner.eGet(feature) instanceof Double d)) {
                 return "";
             }
-            return "= " + TradeUnits.format(d, si);
+            return "= " + UnitTable.format(d, si);
         }
     }
 }

@@ -6,7 +6,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 import org.tracewell.model.units.TradeUnit;
-import org.tracewell.model.units.TradeUnits;
+import org.tracewell.model.units.UnitTable;
 
 /**
  * Reads a value typed in trade units — a number and an optional unit, e.g. {@code "3 m/min"}, {@code "33.3 1/s"},
@@ -58,8 +58,8 @@ public final class TradeValueParser {
             return number;
         }
         String unitSymbol = typedUnit.isEmpty() ? shown : KEYBOARD_SPELLINGS.getOrDefault(typedUnit, typedUnit);
-        Optional<TradeUnit> unit = TradeUnits.find(unitSymbol);
-        TradeUnit si = TradeUnits.get(siUnit);
+        Optional<TradeUnit> unit = UnitTable.find(unitSymbol);
+        TradeUnit si = UnitTable.get(siUnit);
         if (unit.isEmpty() || !unit.get().isCompatibleWith(si)) {
             throw new IllegalArgumentException("'" + typedUnit + "' is not a unit of this quantity; use "
                     + String.join(" or ", compatibleUnits(si)) + " (" + example + ")");
@@ -69,7 +69,7 @@ public final class TradeValueParser {
     }
 
     private static java.util.List<String> compatibleUnits(TradeUnit si) {
-        return TradeUnits.symbols().stream().map(TradeUnits::get).filter(u -> u.isCompatibleWith(si))
+        return UnitTable.symbols().stream().map(UnitTable::get).filter(u -> u.isCompatibleWith(si))
                 .map(TradeUnit::symbol).toList();
     }
 }

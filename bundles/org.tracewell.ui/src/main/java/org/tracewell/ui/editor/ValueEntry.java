@@ -20,7 +20,7 @@ import org.eclipse.emf.edit.domain.EditingDomain;
 import org.tracewell.core.validation.ModelValidation;
 import org.tracewell.core.validation.ValidationProblem;
 import org.tracewell.engine.poly.CoefficientText;
-import org.tracewell.model.units.TradeUnits;
+import org.tracewell.model.units.UnitTable;
 import org.tracewell.model.units.UnitAnnotations;
 
 /**
@@ -43,7 +43,7 @@ public final class ValueEntry {
         if (feature.isMany()) {
             List<String> parts = new ArrayList<>();
             for (Object each : (List<?>) value) {
-                parts.add(each instanceof Double d ? TradeUnits.formatNumber(d, 0) : String.valueOf(each));
+                parts.add(each instanceof Double d ? UnitTable.formatNumber(d, 0) : String.valueOf(each));
             }
             return String.join(" ", parts);
         }

@@ -175,7 +175,7 @@ public final class TradeLabels {
             label.append(orUnnamed(r.getAllocatedAxis().getName())).append(' ');
         }
         label.append(what).append(bound)
-                .append(org.tracewell.model.units.TradeUnits.format(r.getLimit(), r.getDisplayUnit()));
+                .append(org.tracewell.model.units.UnitTable.format(r.getLimit(), r.getDisplayUnit()));
         return label.toString();
     }
 
