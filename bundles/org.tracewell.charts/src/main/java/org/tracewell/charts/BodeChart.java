@@ -45,7 +45,7 @@ public final class BodeChart {
             phase.addSeries(xySeries(s.name(), Decimation.minMax(hz, deg, COLUMNS, true)));
         }
 
-        LogAxis frequency = new LogAxis("Frequency (Hz)");
+        LogAxis frequency = new PlainLabelLogAxis("Frequency (Hz)");
         frequency.setSmallestValue(1e-6);
         frequency.setBase(10);
         frequency.setNumberFormatOverride(new java.text.DecimalFormat("0.####"));

@@ -2,14 +2,12 @@ package org.tracewell.charts;
 
 import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
-import java.io.ByteArrayOutputStream;
+import java.awt.image.BufferedImage;
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 
@@ -22,15 +20,29 @@ public final class ChartExport {
     private ChartExport() {
     }
 
+    /** Opaque RGB PNG (the charts have a white background); the same chart always gives the same bytes. */
     public static byte[] png(JFreeChart chart, int widthPx, int heightPx) {
         checkSize(widthPx, heightPx);
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        BufferedImage image = new BufferedImage(widthPx, heightPx, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
         try {
-            ChartUtils.writeChartAsPNG(out, chart, widthPx, heightPx);
-        } catch (IOException e) {
-            throw new UncheckedIOException("could not encode the chart as PNG", e);
+            draw(chart, g, widthPx, heightPx);
+        } finally {
+            g.dispose();
         }
-        return out.toByteArray();
+        return PngEncoder.encode(image);
+    }
+
+    /**
+     * Draws a small throw-away chart so that Java 2D, its fonts and the chart classes are loaded and initialised.
+     * A short headless run calls this on an otherwise idle core while its analysis runs, so the first real
+     * chart does not pay for that start-up.
+     */
+    public static void warmUp() {
+        TimeSeries ramp = new TimeSeries("warm-up", new double[] { 0, 1, 2 }, new double[] { 0, 1e-6, 4e-6 });
+        JFreeChart chart = TimeChart.create("warm-up", java.util.List.of(ramp), DisplayScale.SECONDS,
+                DisplayScale.MICROMETRES, 3e-6, true);
+        png(chart, 160, 120);
     }
 
     public static String svg(JFreeChart chart, int widthPx, int heightPx) {

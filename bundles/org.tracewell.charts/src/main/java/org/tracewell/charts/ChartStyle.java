@@ -11,6 +11,7 @@ import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYItemRenderer;
+import org.jfree.chart.text.TextUtils;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.RectangleInsets;
@@ -52,6 +53,13 @@ public final class ChartStyle {
     static final Stroke LIMIT_STROKE = new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
             new float[] {6f, 4f}, 0f);
     static final Stroke GRID_STROKE = new BasicStroke(0.6f);
+
+    static {
+        // By default JFreeChart draws rotated text (the vertical axis labels) through a full TextLayout, a
+        // workaround for old Java 2D bugs; current runtimes draw rotated strings correctly at a fraction of
+        // the cost, which matters for the report's twenty-odd charts.
+        TextUtils.setUseDrawRotatedStringWorkaround(false);
+    }
 
     private ChartStyle() {
     }

@@ -1,5 +1,6 @@
 package org.tracewell.charts;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -43,9 +44,25 @@ class ChartRenderingTest {
         // (Ogata, Modern Control Engineering, ch. 7 — from memory; recomputed in DOMAIN.md §7).
         Margins margins = new Margins(1.2271, Math.toRadians(25.39), Math.sqrt(5), 3.0);
         JFreeChart chart = BodeChart.create("Position loop", List.of(ogataLoop()), margins);
-        BufferedImage image = ImageIO.read(new ByteArrayInputStream(ChartExport.png(chart, 800, 500)));
+        byte[] png = ChartExport.png(chart, 800, 500);
+        BufferedImage image = ImageIO.read(new ByteArrayInputStream(png));
         assertEquals(800, image.getWidth());
         assertEquals(500, image.getHeight());
+        assertArrayEquals(png, ChartExport.png(chart, 800, 500), "same chart, same bytes");
+    }
+
+    @Test
+    void logFrequencyAxisLabelsEveryDecadeAsPlainNumbers() {
+        JFreeChart chart = BodeChart.create("Position loop", List.of(ogataLoop()), Margins.NONE);
+        ChartExport.png(chart, 800, 500); // lays the axis out
+        CombinedDomainXYPlot plot = (CombinedDomainXYPlot) chart.getPlot();
+        java.awt.image.BufferedImage scratch = new BufferedImage(800, 500, BufferedImage.TYPE_INT_RGB);
+        java.util.List<?> ticks = plot.getDomainAxis().refreshTicks(scratch.createGraphics(),
+                new org.jfree.chart.axis.AxisState(), new java.awt.geom.Rectangle2D.Double(0, 0, 700, 400),
+                org.jfree.chart.ui.RectangleEdge.BOTTOM);
+        java.util.List<String> labels = ticks.stream().map(t -> ((org.jfree.chart.axis.Tick) t).getText())
+                .filter(t -> t != null && !t.isEmpty()).toList();
+        assertTrue(labels.contains("0.1") && labels.contains("1") && labels.contains("10"), labels.toString());
     }
 
     @Test

@@ -24,6 +24,7 @@ import com.google.gson.JsonObject;
 
 import org.tracewell.core.Examples;
 import org.tracewell.report.ReportInput;
+import org.tracewell.charts.ChartExport;
 import org.tracewell.report.ReportWriter;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.core.analysis.AnalysisCancelledException;
@@ -32,6 +33,7 @@ import org.tracewell.core.analysis.CancellationFlag;
 import org.tracewell.core.analysis.ContourResult;
 import org.tracewell.core.analysis.ContourRun;
 import org.tracewell.core.analysis.ContourTimeSeries;
+import org.tracewell.core.analysis.EstimateCheck;
 import org.tracewell.core.analysis.FeedFollowingError;
 import org.tracewell.core.analysis.MachineBudget;
 import org.tracewell.core.analysis.MachineBudgets;
@@ -82,6 +84,16 @@ public final class AnalyzeCommand {
             return ExitCode.BAD_INPUT;
         }
         Path file = options.file();
+        // The model load and the analysis leave a core idle: load the chart machinery there meanwhile.
+        Thread warmUp = new Thread(() -> {
+            try {
+                ChartExport.warmUp();
+            } catch (RuntimeException ignored) {
+                // only a head start: the report's own drawing reports any real problem
+            }
+        }, "chart warm-up");
+        warmUp.setDaemon(true);
+        warmUp.start();
         Machine machine;
         byte[] bytes;
         try {
@@ -406,6 +418,18 @@ public final class AnalyzeCommand {
             put(estimate, "cornerErrorUm", scale(c.estimate().cornerError(), 1e6));
             estimate.addProperty("basis", c.estimate().basis());
             o.add("estimate", estimate);
+            JsonArray checks = new JsonArray();
+            for (EstimateCheck check : c.estimateChecks()) {
+                JsonObject row = new JsonObject();
+                row.addProperty("figure", check.figure());
+                row.addProperty("simulatedUm", TradeUnits.micrometres(check.simulated()));
+                row.addProperty("estimateUm", TradeUnits.micrometres(check.estimate()));
+                row.addProperty("formula", check.formula());
+                double relative = check.relativeDifference();
+                put(row, "relativeDifference", Double.isNaN(relative) ? OptionalDouble.empty() : OptionalDouble.of(relative));
+                checks.add(row);
+            }
+            o.add("estimateChecks", checks);
             o.addProperty("csv", csvName(c, run));
             JsonArray notes = new JsonArray();
             c.notes().forEach(notes::add);

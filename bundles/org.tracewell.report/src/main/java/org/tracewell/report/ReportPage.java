@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
@@ -18,6 +19,7 @@ import org.tracewell.charts.Magnification;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.core.analysis.AxisResult;
 import org.tracewell.core.analysis.ContourEstimate;
+import org.tracewell.core.analysis.EstimateCheck;
 import org.tracewell.core.analysis.ContourResult;
 import org.tracewell.core.analysis.ContourRun;
 import org.tracewell.core.analysis.ContourRunMetrics;
@@ -438,7 +440,7 @@ final class ReportPage {
                         Cell.number(Fmt.num(m.duration()) + " s"), Cell.number(Integer.toString(m.sampleCount())));
             }
             runs.end();
-            estimates(c.estimate());
+            estimates(c);
             page.open("div", "charts");
             ContourRun programmed = c.programmedRun();
             figure("following-" + c.contourId(), ReportCharts.followingError("Contour " + c.contourName()
@@ -455,15 +457,20 @@ final class ReportPage {
         page.close("section");
     }
 
-    private void estimates(ContourEstimate e) {
-        Page.Table t = page.table("estimates", "Analytic estimates beside the simulation (" + e.basis() + ")",
-                "Kv u / v (1/s)", "Following error u / v", "Radius loss exact / approximate",
-                "G from Kv mismatch", "Line error from Kv mismatch", "Corner error");
-        t.row(Cell.number(Fmt.num(e.firstAxisKv()) + " / " + Fmt.num(e.secondAxisKv())),
-                Cell.number(Fmt.um(e.followingErrorFirst()) + " / " + Fmt.um(e.followingErrorSecond()) + " µm"),
-                Cell.number(Fmt.um(e.radiusLossExact()) + " / " + Fmt.um(e.radiusLossApprox()) + " µm"),
-                Cell.number(Fmt.um(e.circularDeviationMismatch()) + " µm"),
-                Cell.number(Fmt.um(e.lineMismatchError()) + " µm"), Cell.number(Fmt.um(e.cornerError()) + " µm"));
+    private void estimates(ContourResult c) {
+        ContourEstimate e = c.estimate();
+        Page.Table t = page.table("estimates", "Simulated figures beside their analytic estimates (Kv "
+                + c.firstAxisName() + " " + Fmt.num(e.firstAxisKv()) + " 1/s, " + c.secondAxisName() + " "
+                + Fmt.num(e.secondAxisKv()) + " 1/s; " + e.basis() + ")",
+                "Figure", "Simulated", "Estimate", "Formula", "Difference", "Relative");
+        for (EstimateCheck check : c.estimateChecks()) {
+            double relative = check.relativeDifference();
+            t.row(Cell.text(check.figure()), Cell.number(Fmt.um(check.simulated()) + " µm"),
+                    Cell.number(Fmt.um(check.estimate()) + " µm"), Cell.text(check.formula()),
+                    Cell.number(Fmt.um(check.difference()) + " µm"),
+                    Double.isNaN(relative) ? Cell.text("—")
+                            : Cell.number(String.format(Locale.ROOT, "%+.1f %%", relative * 100)));
+        }
         t.end();
     }
 

@@ -15,6 +15,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 
 import org.jfree.chart.JFreeChart;
+import org.tracewell.charts.ChartExport;
 import org.tracewell.requirements.ReviewResults;
 
 /**
@@ -66,14 +67,14 @@ public final class ReportWriter {
             @Override
             public String add(String slug, JFreeChart chart, int widthPx, int heightPx) throws IOException {
                 if (mode == ImageMode.EMBEDDED) {
-                    byte[] png = ChartImages.png(chart, widthPx, heightPx);
+                    byte[] png = ChartExport.png(chart, widthPx, heightPx);
                     return "data:image/png;base64," + Base64.getEncoder().encodeToString(png);
                 }
                 sequence++;
                 String name = String.format(Locale.ROOT, "%02d-%s.png", sequence, fileSlug(slug));
                 Path file = chartDir.resolve(name);
                 pending.add(painters.submit(() -> {
-                    Files.write(file, ChartImages.png(chart, widthPx, heightPx));
+                    Files.write(file, ChartExport.png(chart, widthPx, heightPx));
                     return null;
                 }));
                 written.add(file);

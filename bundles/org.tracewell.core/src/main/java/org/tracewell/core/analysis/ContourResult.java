@@ -1,5 +1,6 @@
 package org.tracewell.core.analysis;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -42,6 +43,39 @@ public record ContourResult(String contourId, String contourName, String firstAx
     /** The run in {@code direction}, if simulated. */
     public Optional<ContourRun> run(RunDirection direction) {
         return runs.stream().filter(r -> r.direction() == direction).findFirst();
+    }
+
+    /**
+     * Every simulated figure that has a closed-form counterpart, beside it: peak following errors (v/Kv), and per
+     * run the radius loss and G of a circle, the error of a straight line from Kv mismatch, the corner error.
+     */
+    public List<EstimateCheck> estimateChecks() {
+        List<EstimateCheck> checks = new ArrayList<>();
+        ContourRunMetrics programmed = programmedRun().metrics();
+        checks.add(new EstimateCheck("peak following error " + firstAxisName, programmed.peakFollowingErrorFirst(),
+                estimate.followingErrorFirst(), "v/Kv"));
+        checks.add(new EstimateCheck("peak following error " + secondAxisName, programmed.peakFollowingErrorSecond(),
+                estimate.followingErrorSecond(), "v/Kv"));
+        for (ContourRun run : runs) {
+            String label = run.direction().label();
+            if (run.circleTest().isPresent()) {
+                double loss = radius - run.circleTest().get().leastSquaresCircle().radius();
+                estimate.radiusLossExact().ifPresent(e -> checks.add(new EstimateCheck("radius loss " + label, loss,
+                        e, "R(1 − 1/√(1+(ω/Kv)²))")));
+                estimate.radiusLossApprox().ifPresent(e -> checks.add(new EstimateCheck("radius loss " + label, loss,
+                        e, "F²/(2R·Kv²)")));
+                estimate.circularDeviationMismatch().ifPresent(e -> checks.add(new EstimateCheck(
+                        "circular deviation G " + label, run.circleTest().get().circularDeviation(), e,
+                        "F·|1/Kx − 1/Ky|")));
+            } else {
+                double max = run.metrics().maxContourError();
+                estimate.lineMismatchError().ifPresent(e -> checks.add(new EstimateCheck(
+                        "max contour error " + label + " (line, Kv mismatch)", max, e, "(V/2)·sin2θ·|1/Kx − 1/Ky|")));
+                estimate.cornerError().ifPresent(e -> checks.add(new EstimateCheck(
+                        "max contour error " + label + " (corner)", max, e, "V/(e·Kv)")));
+            }
+        }
+        return List.copyOf(checks);
     }
 
     /** The largest max-contour-error of all runs, m. */

@@ -49,6 +49,27 @@ class MachineAnalyzerTest {
     }
 
     @Test
+    void everySimulatedCircleFigureStandsBesideItsEstimate() {
+        ContourResult circle = analysis.contour("lm3020-circle-r100-cw").orElseThrow();
+        java.util.List<EstimateCheck> checks = circle.estimateChecks();
+        // two following errors, then per direction: radius loss (exact and approximate form) and G
+        assertEquals(2 + 2 * 3, checks.size(), checks.toString());
+        for (EstimateCheck check : checks) {
+            if (check.figure().startsWith("radius loss")) {
+                // Same 10 % band as above: the least-squares radius loss against R(1 − 1/√(1+(ω/Kv)²)) and
+                // F²/(2RKv²) (DOMAIN.md §4 [der]); the two forms differ by O((ω/Kv)⁴), far below that.
+                assertEquals(check.estimate(), check.simulated(), 0.10 * check.estimate(), check.toString());
+                assertEquals(check.difference() / check.estimate(), check.relativeDifference(), 1e-12);
+            }
+            if (check.figure().startsWith("circular deviation G")) {
+                // Matched Kv (2.4 (m/min)/mm on X1 and Y): the mismatch estimate is zero, nothing to divide by.
+                assertEquals(0, check.estimate(), EstimateCheck.NEGLIGIBLE);
+                assertTrue(Double.isNaN(check.relativeDifference()));
+            }
+        }
+    }
+
+    @Test
     void followingErrorAtContourFeedIsVOverKv() {
         // e = v/Kv for a type-1 loop without feedforward (DOMAIN.md §4, common practice).
         AxisResult x1 = analysis.axis("lm3020-x1").orElseThrow();
