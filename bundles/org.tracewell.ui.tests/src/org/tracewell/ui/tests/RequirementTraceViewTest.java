@@ -69,6 +69,14 @@ class RequirementTraceViewTest {
                 "an allocation shows the result that verifies it");
         assertTrue(view.shownVerdict().startsWith("LM-3020"), view.shownVerdict());
 
+        // The toolbar exports what is on screen as CSV and HTML.
+        for (String format : List.of("csv", "html")) {
+            assertTrue(view.getViewSite().getActionBars().getToolBarManager()
+                    .find(RequirementTraceView.EXPORT_ACTION_PREFIX + format) != null, "export " + format);
+        }
+        String csv = org.tracewell.report.TraceMatrixExport.csv(view.shownResults());
+        assertEquals(view.shownResults().requirements().results().size() + 1, csv.split("\r\n").length, csv);
+
         // The Error Budget view shows the same review.
         ErrorBudgetView budget = (ErrorBudgetView) page.showView(ErrorBudgetView.ID);
         waitFor(() -> budget.shownResults() != null && !budget.shownRows().isEmpty());

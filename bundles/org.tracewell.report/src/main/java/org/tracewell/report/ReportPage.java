@@ -5,7 +5,6 @@ import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -112,6 +111,23 @@ final class ReportPage {
         page.open("footer").text("Written by Tracewell " + review.provenance().toolVersion()
                 + " from " + review.provenance().inputFile() + ". Figures are model results, not measurements.")
                 .close("footer");
+        page.documentEnd();
+        return page.toString();
+    }
+
+    /** A page with the trace alone: requirement tree, compliance matrix, apportionment, suggestions. */
+    String renderTraceMatrix() {
+        ReviewProvenance p = review.provenance();
+        page.documentStart("Requirement trace: " + analysis.machineName(), ReportStyle.CSS);
+        page.open("header");
+        page.element("h1", "Requirement trace: " + analysis.machineName());
+        page.element("p", "subtitle", "Machine " + analysis.machineId() + " · input " + p.inputFile()
+                + " · analysed " + DATE.format(p.analysedAt()) + " · Tracewell " + p.toolVersion());
+        caution();
+        page.close("header");
+        trace();
+        page.open("footer").text("Written by Tracewell " + p.toolVersion() + " from " + p.inputFile()
+                + ". Figures are model results, not measurements.").close("footer");
         page.documentEnd();
         return page.toString();
     }
@@ -619,14 +635,8 @@ final class ReportPage {
                 + "the computed value, margin and status.");
         Page.Table t = page.table("trace", "Machine requirement → allocations → computed value", "Requirement",
                 "Statement", "Allocated to", "Verified by", "Value", "Limit", "Margin", "Status", "Rationale");
-        Set<String> shown = new LinkedHashSet<>();
-        for (RequirementResult top : requirements.machineLevel()) {
-            traceRows(t, top, 0, shown);
-        }
-        for (RequirementResult r : requirements.results()) {
-            if (!shown.contains(r.id())) {
-                traceRows(t, r, 0, shown); // parent missing: shown at the top level so nothing is hidden
-            }
+        for (TraceMatrixExport.Row row : TraceMatrixExport.rows(requirements)) {
+            traceRow(t, row.result(), row.depth());
         }
         if (t.rowCount() == 0) {
             page.element("p", "muted", "No requirements.");
@@ -639,10 +649,7 @@ final class ReportPage {
         page.close("section");
     }
 
-    private void traceRows(Page.Table t, RequirementResult r, int depth, Set<String> shown) {
-        if (!shown.add(r.id())) {
-            return;
-        }
+    private void traceRow(Page.Table t, RequirementResult r, int depth) {
         String unit = unitOf(r);
         String verified = r.verifiedBy().isEmpty() ? "—"
                 : r.verifiedBy().stream().map(v -> v.describe()).collect(Collectors.joining("; "));
@@ -653,9 +660,6 @@ final class ReportPage {
                 Cell.number(("atLeast".equals(r.bound()) ? "≥ " : "≤ ") + withUnit(Fmt.num(r.displayLimit()), unit)),
                 Cell.number(withUnit(Fmt.num(r.displayMargin()), unit)), statusCell(r),
                 Cell.text(r.rationale().isEmpty() ? "—" : r.rationale()));
-        for (RequirementResult child : requirements.children(r.id())) {
-            traceRows(t, child, depth + 1, shown);
-        }
     }
 
     private void complianceMatrix() {

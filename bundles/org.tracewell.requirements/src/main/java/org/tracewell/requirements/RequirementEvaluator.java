@@ -52,7 +52,7 @@ public final class RequirementEvaluator {
         List<DerivedRequirement> derived = new ArrayList<>();
         for (Requirement r : machine.getRequirements()) {
             budget.forRequirement(r.getId()).ifPresent(b -> apportionments.add(apportion(r, b, machine)));
-            derived.addAll(inverseDesign(r, analysis));
+            derived.addAll(inverseDesign(r, analysis, budget.forRequirement(r.getId())));
         }
         return new RequirementReport(machine.getId(), results, coverage, apportionments, derived,
                 matrix(machine, results));
@@ -312,13 +312,28 @@ public final class RequirementEvaluator {
         return new RequirementApportionment(r.getId(), basis, apportionment, out);
     }
 
-    /** Inverse-design limits from a machine contour requirement on each of its contours' axis pairs. */
-    static List<DerivedRequirement> inverseDesign(Requirement r, MachineAnalysis analysis) {
+    /**
+     * Inverse-design limits from a machine contour requirement on each of its contours' axis pairs. With an error
+     * budget, the servo figure may use only the headroom the other contributors and the reserve leave: the
+     * largest value of the budget's computed Kv-mismatch line that keeps the total within the limit less the
+     * reserve, plus the Kv-independent servo-lag part it replaces. Without a budget the whole limit less the
+     * reserve is allowed.
+     */
+    static List<DerivedRequirement> inverseDesign(Requirement r, MachineAnalysis analysis,
+            Optional<org.tracewell.core.analysis.RequirementBudget> budget) {
         List<DerivedRequirement> out = new ArrayList<>();
         if (r.getParent() != null || r.getKind() != RequirementKind.CONTOUR_DEVIATION || !(r.getLimit() > 0)) {
             return out;
         }
-        double allowed = r.getLimit() * (1 - MachineBudget.RESERVE_FRACTION);
+        double allowedTotal = r.getLimit() * (1 - MachineBudget.RESERVE_FRACTION);
+        double allowed = allowedTotal;
+        String basis = r.getId() + " less the reserve";
+        Optional<org.tracewell.engine.budget.ErrorBudget> lines = budget.map(b -> b.budget());
+        String mismatchLine = MachineBudgets.computedLineId(r.getId(), "mismatch");
+        if (lines.isPresent() && lines.get().lines().stream().anyMatch(l -> l.id().equals(mismatchLine))) {
+            allowed = InverseDesign.headroomForLine(lines.get(), mismatchLine, allowedTotal);
+            basis = "the headroom " + r.getId() + "'s budget leaves after its other contributors and the reserve";
+        }
         java.util.Set<String> seen = new java.util.HashSet<>();
         for (Contour c : r.getContours()) {
             Optional<ContourResult> cr = analysis.contour(c.getId());
@@ -338,11 +353,16 @@ public final class RequirementEvaluator {
                     : InverseDesign.maxGainMismatchForLine(allowed, result.feed(), Math.PI / 4);
             out.add(new DerivedRequirement(r.getId() + ":derived:" + pair + "-mismatch", r.getId(), "", pair,
                     "|1/Kx − 1/Ky| of " + pair + " at most " + TradeUnits.format(mismatch.value() * 1e3, 3)
-                            + " ms, from " + r.getId() + " less the reserve", mismatch, OptionalDouble.of(present),
+                            + " ms, from " + basis, mismatch, OptionalDouble.of(present),
                     mismatch.isSatisfiedBy(present)));
             if (result.fullCircle() && r.getMetric() == ContourMetric.RADIAL_DEVIATION) {
+                String servoLine = MachineBudgets.computedLineId(r.getId(), "servo-lag");
+                double allowedLoss = lines.isPresent()
+                        && lines.get().lines().stream().anyMatch(l -> l.id().equals(servoLine))
+                                ? InverseDesign.headroomForLine(lines.get(), servoLine, allowedTotal)
+                                : allowedTotal;
                 DesignLimit kvMin = InverseDesign.minPositionGainForRadiusLoss(result.radius(), result.feed(),
-                        allowed);
+                        allowedLoss);
                 double kv = Math.min(kx, ky);
                 out.add(new DerivedRequirement(r.getId() + ":derived:" + pair + "-kv-min", r.getId(), "", pair,
                         "Kv of " + pair + " at least " + TradeUnits.format(TradeUnits.kvToMPerMinPerMm(kvMin.value()), 3)

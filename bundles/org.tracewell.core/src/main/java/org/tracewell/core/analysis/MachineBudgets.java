@@ -43,6 +43,11 @@ public final class MachineBudgets {
 
     static final String COMPUTED_PREFIX = "computed:";
 
+    /** Id of a computed line of a requirement's budget, e.g. ("lm3020-r1", "mismatch"). */
+    public static String computedLineId(String requirementId, String kind) {
+        return COMPUTED_PREFIX + requirementId + ":" + kind;
+    }
+
     private MachineBudgets() {
     }
 
@@ -144,16 +149,16 @@ public final class MachineBudgets {
         mismatch = Math.min(mismatch, worst);
         String where = "contour '" + worstContour.contourName() + "' " + worstRun.direction().label();
         String pair = worstContour.firstAxisName() + "/" + worstContour.secondAxisName();
-        String prefix = COMPUTED_PREFIX + requirement.getId() + ":";
-        lines.add(BudgetLine.systematic(prefix + "servo-lag", "servo lag " + pair, null, SourceKind.SERVO_LAG,
-                worst - mismatch, "tracking simulation, " + where + ": " + metricName(metric) + " "
+        String id = requirement.getId();
+        lines.add(BudgetLine.systematic(computedLineId(id, "servo-lag"), "servo lag " + pair, null,
+                SourceKind.SERVO_LAG, worst - mismatch, "tracking simulation, " + where + ": " + metricName(metric) + " "
                         + micro(worst) + " µm less the Kv-mismatch part"));
-        lines.add(BudgetLine.systematic(prefix + "mismatch", "Kv mismatch " + pair, null, SourceKind.GAIN_MISMATCH,
-                mismatch, "Kx = " + estimate.firstAxisKv() + " 1/s, Ky = " + estimate.secondAxisKv()
+        lines.add(BudgetLine.systematic(computedLineId(id, "mismatch"), "Kv mismatch " + pair, null,
+                SourceKind.GAIN_MISMATCH, mismatch, "Kx = " + estimate.firstAxisKv() + " 1/s, Ky = " + estimate.secondAxisKv()
                         + " 1/s at the programmed feed; " + ServoErrorFormulas.KAKINO_1993));
         if (estimate.cornerError().isPresent()) {
-            lines.add(BudgetLine.systematic(prefix + "corner", "corner " + pair, null, SourceKind.CORNER,
-                    estimate.cornerError().getAsDouble(), "V/(e·Kv) at the programmed feed (derived,"
+            lines.add(BudgetLine.systematic(computedLineId(id, "corner"), "corner " + pair, null,
+                    SourceKind.CORNER, estimate.cornerError().getAsDouble(), "V/(e·Kv) at the programmed feed (derived,"
                             + " DOMAIN.md §4); the planner's deceleration makes it an upper bound"));
         }
         for (String axisId : planeAxes) {

@@ -14,6 +14,46 @@ public final class InverseDesign {
     }
 
     /**
+     * The largest value the line {@code lineId} of {@code budget} may take while the budget's total (in its own
+     * combination method and coverage factor) stays within {@code allowedTotal}, m, all other lines held: the
+     * headroom a budget leaves for one contributor. The total never decreases as a line grows (each method is a
+     * monotone function of |c_i|), so an upper bracket found by doubling and then bisection give it to 1e-12
+     * relative. Returns 0 when the other lines alone already use up the allowed total, and +∞ when the line does
+     * not count towards the total (sensitivity 0).
+     */
+    public static double headroomForLine(ErrorBudget budget, String lineId, double allowedTotal) {
+        BudgetChecks.requireNonNull("budget", budget);
+        BudgetChecks.requireNonNegative("allowed total", allowedTotal, "m");
+        BudgetLine line = budget.lines().stream().filter(l -> l.id().equals(lineId)).findFirst()
+                .orElseThrow(() -> new IllegalArgumentException("budget " + budget.name() + " has no line with id \""
+                        + lineId + "\"; known ids: " + budget.lines().stream().map(BudgetLine::id).toList()));
+        if (totalWith(budget, line, 0) > allowedTotal) {
+            return 0;
+        }
+        double high = Math.max(allowedTotal, 1e-12);
+        while (totalWith(budget, line, high) <= allowedTotal) {
+            high *= 2;
+            if (high > 1e6) {
+                return Double.POSITIVE_INFINITY;
+            }
+        }
+        double low = 0;
+        for (int i = 0; i < 200 && high - low > 1e-12 * high; i++) {
+            double mid = 0.5 * (low + high);
+            if (totalWith(budget, line, mid) <= allowedTotal) {
+                low = mid;
+            } else {
+                high = mid;
+            }
+        }
+        return low;
+    }
+
+    private static double totalWith(ErrorBudget budget, BudgetLine line, double value) {
+        return budget.withReplacedLine(line.withValue(value)).evaluate().total();
+    }
+
+    /**
      * Largest |1/Kx − 1/Ky| that keeps the circular deviation from gain mismatch within {@code allowedDeviation}
      * (m, &gt;= 0) at feed {@code feed} (m/s): G/F.
      */

@@ -231,4 +231,39 @@ class InverseDesignTest {
         assertTrue(kv.statement().startsWith("Kv ≥ 36.78"), kv.statement());
         assertEquals(0.02, ServoErrorFormulas.gainMismatch(25, 50), 1e-15);
     }
+
+    @Test
+    void budgetHeadroomMatchesTheClosedFormOfEachMethod() {
+        // Lines: systematic mismatch m (sought), systematic 6 µm, random uniform ±5 µm (contribution at k = 2:
+        // 2·5/√3 = 5.7735 µm, JCGM 100:2008 rectangular u = a/√3, from memory). Allowed total 20 µm.
+        BudgetLine mismatch = BudgetLine.systematic("m", "Kv mismatch", null, SourceKind.GAIN_MISMATCH, 1 * UM, "x");
+        BudgetLine squareness = BudgetLine.systematic("s", "squareness", "Y", SourceKind.GEOMETRIC, 6 * UM, "x");
+        BudgetLine thermal = new BudgetLine("t", "thermal", "X", SourceKind.THERMAL, 5 * UM, ValueOrigin.ENTERED,
+                ErrorClass.RANDOM, Distribution.UNIFORM, 1.0, 1.0, "x");
+        double r = 2 * 5 / Math.sqrt(3) * UM;
+        double allowed = 20 * UM;
+        java.util.Map<CombinationMethod, Double> byHand = java.util.Map.of(
+                // linear: m + 6 + r = 20
+                CombinationMethod.LINEAR_SUM, allowed - 6 * UM - r,
+                // RSS: m² + 36 + r² = 400
+                CombinationMethod.RSS, Math.sqrt(allowed * allowed - 36 * UM * UM - r * r),
+                // systematic sum plus random RSS: m + 6 + r = 20 (one random line)
+                CombinationMethod.SYSTEMATIC_PLUS_RSS, allowed - 6 * UM - r);
+        for (var e : byHand.entrySet()) {
+            ErrorBudget budget = ErrorBudget.of("G", e.getKey(), java.util.List.of(mismatch, squareness, thermal));
+            double headroom = InverseDesign.headroomForLine(budget, "m", allowed);
+            assertEquals(e.getValue(), headroom, 1e-9 * UM, e.getKey().name());
+            // forward: at the headroom the total is the allowed total
+            assertEquals(allowed, budget.withReplacedLine(mismatch.withValue(headroom)).evaluate().total(),
+                    1e-9 * UM, e.getKey().name());
+        }
+        // mean of linear and RSS: no closed form used here; forward substitution only.
+        ErrorBudget mean = ErrorBudget.of("G", CombinationMethod.MEAN_OF_LINEAR_AND_RSS,
+                java.util.List.of(mismatch, squareness, thermal));
+        double h = InverseDesign.headroomForLine(mean, "m", allowed);
+        assertEquals(allowed, mean.withReplacedLine(mismatch.withValue(h)).evaluate().total(), 1e-9 * UM);
+        // other lines alone over the allowed total: no headroom
+        assertEquals(0, InverseDesign.headroomForLine(mean, "m", 5 * UM));
+        assertThrows(IllegalArgumentException.class, () -> InverseDesign.headroomForLine(mean, "nope", allowed));
+    }
 }

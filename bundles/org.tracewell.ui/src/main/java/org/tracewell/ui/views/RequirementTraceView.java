@@ -1,11 +1,17 @@
 package org.tracewell.ui.views;
 
+import java.io.IOException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Consumer;
+import java.util.function.Function;
 
+import org.eclipse.jface.action.Action;
+import org.eclipse.jface.action.IToolBarManager;
+import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.jface.resource.JFaceResources;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.IStructuredSelection;
@@ -17,17 +23,21 @@ import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.TreeItem;
 import org.eclipse.ui.part.ViewPart;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.engine.units.TradeUnits;
 import org.tracewell.model.Machine;
 import org.tracewell.model.Requirement;
+import org.tracewell.report.TraceMatrixExport;
 import org.tracewell.requirements.DisplayUnits;
 import org.tracewell.requirements.RequirementReport;
 import org.tracewell.requirements.RequirementResult;
 import org.tracewell.requirements.RequirementStatus;
+import org.tracewell.requirements.ReviewResults;
 import org.tracewell.requirements.Verification;
 import org.tracewell.ui.editor.MachineEditor;
 
@@ -43,6 +53,8 @@ public final class RequirementTraceView extends ViewPart {
 
     /** Significant figures of values, limits and margins: enough to see a few % of margin on a µm limit. */
     private static final int SIGNIFICANT = 3;
+    /** Ids of the toolbar's export actions: this prefix plus "csv" or "html". */
+    public static final String EXPORT_ACTION_PREFIX = "org.tracewell.ui.trace.export.";
 
     private static final String[] COLUMNS = {"Requirement / statement", "Value", "Limit", "Margin", "Status",
         "Verified by"};
@@ -71,6 +83,7 @@ public final class RequirementTraceView extends ViewPart {
     private TreeViewer viewer;
     private ActiveMachineReview review;
     private volatile RequirementReport shown;
+    private volatile ReviewResults shownResults;
     private final Consumer<ActiveMachineReview.Outcome> listener = this::show;
 
     @Override
@@ -97,7 +110,43 @@ public final class RequirementTraceView extends ViewPart {
         caution.setText("Caution: " + SafetyCaution.SHORT);
         caution.setLayoutData(new GridData(SWT.FILL, SWT.BOTTOM, true, false));
 
+        IToolBarManager toolBar = getViewSite().getActionBars().getToolBarManager();
+        toolBar.add(exportAction("Export Trace as CSV…", "csv", TraceMatrixExport::csv));
+        toolBar.add(exportAction("Export Trace as HTML…", "html", TraceMatrixExport::html));
+
         review = ActiveMachineReview.subscribe(getSite().getPage(), listener);
+    }
+
+    /** Writes the trace matrix of the review on screen; the file dialog asks before replacing a file. */
+    private Action exportAction(String label, String extension, Function<ReviewResults, String> format) {
+        Action action = new Action(label) {
+            @Override
+            public void run() {
+                ReviewResults results = shownResults;
+                Shell shell = viewer.getControl().getShell();
+                if (results == null) {
+                    MessageDialog.openInformation(shell, "Export Trace",
+                            "There is no reviewed machine yet: open a machine and wait for the review to finish.");
+                    return;
+                }
+                FileDialog dialog = new FileDialog(shell, SWT.SAVE);
+                dialog.setText(label.replace("…", ""));
+                dialog.setFilterExtensions(new String[] {"*." + extension});
+                dialog.setFileName(results.analysis().machineId() + "-trace." + extension);
+                dialog.setOverwrite(true);
+                String chosen = dialog.open();
+                if (chosen == null) {
+                    return;
+                }
+                try {
+                    TraceMatrixExport.write(format.apply(results), Path.of(chosen));
+                } catch (IOException | RuntimeException e) {
+                    MessageDialog.openError(shell, "Export Trace", "Could not write " + chosen + ": " + e.getMessage());
+                }
+            }
+        };
+        action.setId(EXPORT_ACTION_PREFIX + extension);
+        return action;
     }
 
     private void show(ActiveMachineReview.Outcome outcome) {
@@ -105,6 +154,7 @@ public final class RequirementTraceView extends ViewPart {
             return;
         }
         RequirementReport report = outcome.results() == null ? null : outcome.results().requirements();
+        shownResults = outcome.results();
         if (report == null) {
             shown = null;
             viewer.setInput(null);
@@ -300,6 +350,11 @@ public final class RequirementTraceView extends ViewPart {
     // ------------------------------------------------------------------------------------------------ for tests
 
     /** The requirements report now in the tree; null while there is none. */
+    /** The review whose trace is on screen (what the export actions write), or null. */
+    public ReviewResults shownResults() {
+        return shownResults;
+    }
+
     public RequirementReport shownReport() {
         return shown;
     }
