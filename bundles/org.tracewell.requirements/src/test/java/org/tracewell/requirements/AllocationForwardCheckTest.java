@@ -4,20 +4,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.util.List;
 
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.tracewell.core.analysis.CancellationFlag;
-import org.tracewell.core.analysis.MachineAnalysis;
-import org.tracewell.core.analysis.MachineAnalyzer;
 import org.tracewell.core.analysis.MachineBudget;
-import org.tracewell.core.analysis.MachineBudgets;
-import org.tracewell.core.analysis.ProgressListener;
-import org.tracewell.core.io.ModelFiles;
-import org.tracewell.core.mapping.EngineMapping;
 import org.tracewell.model.Axis;
 import org.tracewell.model.CascadeController;
 import org.tracewell.model.Machine;
@@ -34,15 +26,12 @@ class AllocationForwardCheckTest {
 
     @BeforeAll
     static void evaluate() throws Exception {
-        machine = new ModelFiles().loadMachine(Path.of(System.getProperty("tracewell.examples", "examples"))
-                .resolve("LM-3020.machine"));
+        machine = ExampleMachines.lm3020();
         report = evaluate(machine);
     }
 
     private static RequirementReport evaluate(Machine m) throws Exception {
-        MachineAnalysis analysis = MachineAnalyzer.analyze(EngineMapping.map(m), ProgressListener.SILENT,
-                CancellationFlag.create());
-        return RequirementEvaluator.evaluate(m, analysis, MachineBudgets.build(m, analysis));
+        return ExampleMachines.evaluate(m, ExampleMachines.analyse(m));
     }
 
     @Test

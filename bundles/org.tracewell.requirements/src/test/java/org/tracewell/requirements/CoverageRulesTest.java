@@ -3,19 +3,12 @@ package org.tracewell.requirements;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.util.List;
 
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.tracewell.core.analysis.CancellationFlag;
 import org.tracewell.core.analysis.MachineAnalysis;
-import org.tracewell.core.analysis.MachineAnalyzer;
-import org.tracewell.core.analysis.MachineBudgets;
-import org.tracewell.core.analysis.ProgressListener;
-import org.tracewell.core.io.ModelFiles;
-import org.tracewell.core.mapping.EngineMapping;
 import org.tracewell.model.Machine;
 import org.tracewell.model.Requirement;
 import org.tracewell.model.RequirementKind;
@@ -33,14 +26,12 @@ class CoverageRulesTest {
 
     @BeforeAll
     static void load() throws Exception {
-        machine = new ModelFiles().loadMachine(Path.of(System.getProperty("tracewell.examples", "examples"))
-                .resolve("LM-3020.machine"));
-        analysis = MachineAnalyzer.analyze(EngineMapping.map(machine), ProgressListener.SILENT,
-                CancellationFlag.create());
+        machine = ExampleMachines.lm3020();
+        analysis = ExampleMachines.analyse(machine);
     }
 
     private static List<CoverageFinding> coverage(Machine m) {
-        return RequirementEvaluator.evaluate(m, analysis, MachineBudgets.build(m, analysis)).coverage();
+        return ExampleMachines.evaluate(m, analysis).coverage();
     }
 
     @Test

@@ -4,18 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.util.List;
 
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.tracewell.core.analysis.CancellationFlag;
 import org.tracewell.core.analysis.MachineAnalysis;
-import org.tracewell.core.analysis.MachineAnalyzer;
-import org.tracewell.core.analysis.MachineBudgets;
-import org.tracewell.core.analysis.ProgressListener;
-import org.tracewell.core.io.ModelFiles;
-import org.tracewell.core.mapping.EngineMapping;
 import org.tracewell.model.Machine;
 
 class RequirementEvaluatorTest {
@@ -26,11 +19,9 @@ class RequirementEvaluatorTest {
 
     @BeforeAll
     static void evaluate() throws Exception {
-        machine = new ModelFiles().loadMachine(Path.of(System.getProperty("tracewell.examples", "examples"))
-                .resolve("LM-3020.machine"));
-        analysis = MachineAnalyzer.analyze(EngineMapping.map(machine), ProgressListener.SILENT,
-                CancellationFlag.create());
-        report = RequirementEvaluator.evaluate(machine, analysis, MachineBudgets.build(machine, analysis));
+        machine = ExampleMachines.lm3020();
+        analysis = ExampleMachines.analyse(machine);
+        report = ExampleMachines.evaluate(machine, analysis);
     }
 
     @Test
