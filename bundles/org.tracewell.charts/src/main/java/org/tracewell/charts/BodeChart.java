@@ -59,7 +59,9 @@ public final class BodeChart {
 
         XYPlot magPlot = new XYPlot(magnitude, null, new NumberAxis("Magnitude (dB)"), lines());
         magPlot.addRangeMarker(limitMarker(0, null));
-        XYPlot phasePlot = new XYPlot(phase, null, new NumberAxis("Phase (°)"), lines());
+        XYLineAndShapeRenderer phaseLines = lines();
+        phaseLines.setDefaultSeriesVisibleInLegend(false); // the magnitude plot's legend items name every series
+        XYPlot phasePlot = new XYPlot(phase, null, new NumberAxis("Phase (°)"), phaseLines);
         ((NumberAxis) phasePlot.getRangeAxis()).setAutoRangeIncludesZero(false);
         phasePlot.addRangeMarker(limitMarker(-180, null));
         for (int i = predicted.size(); i < predicted.size() + measured.size(); i++) {

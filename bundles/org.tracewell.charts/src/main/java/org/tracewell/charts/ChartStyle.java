@@ -57,7 +57,7 @@ public final class ChartStyle {
     static final Stroke GRID_STROKE = new BasicStroke(0.6f);
 
     /** Marker of a measured series: measured data reads as samples over the predicted lines. */
-    static final Shape MEASURED_SHAPE = new Ellipse2D.Double(-2.5, -2.5, 5, 5);
+    static final Shape MEASURED_SHAPE = new Ellipse2D.Double(-2, -2, 4, 4);
 
     private ChartStyle() {
     }

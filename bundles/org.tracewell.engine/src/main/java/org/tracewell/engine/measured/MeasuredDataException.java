@@ -53,6 +53,11 @@ public final class MeasuredDataException extends Exception {
         return b.toString();
     }
 
+    /** The message with the file shown as {@code shownName} (e.g. the path a user typed) instead of its name. */
+    public String describe(String shownName) {
+        return compose(shownName, line, column, badText, problem, valid);
+    }
+
     public String fileName() {
         return fileName;
     }

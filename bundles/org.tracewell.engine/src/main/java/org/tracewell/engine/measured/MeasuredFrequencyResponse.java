@@ -5,6 +5,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 
+import org.tracewell.engine.tf.FrequencyResponse;
+
 /**
  * A frequency response measured on a machine, SI inside: angular frequency in rad/s, the response as complex
  * values (real and imaginary part in the unit of the measured quantity, e.g. (rad/s)/(N·m) for torque command to
@@ -25,17 +27,13 @@ public final class MeasuredFrequencyResponse {
     static final List<String> OPTIONAL = List.of("coherence");
 
     private final MeasurementSource source;
-    private final double[] omega;
-    private final double[] re;
-    private final double[] im;
+    private final FrequencyResponse response;
     private final double[] coherence;
 
     private MeasuredFrequencyResponse(MeasurementSource source, double[] omega, double[] re, double[] im,
             double[] coherence) {
         this.source = source;
-        this.omega = omega;
-        this.re = re;
-        this.im = im;
+        this.response = FrequencyResponse.of(omega, re, im);
         this.coherence = coherence;
     }
 
@@ -71,7 +69,7 @@ public final class MeasuredFrequencyResponse {
                         + " = " + coherence[i] + "; must lie in 0..1");
             }
         }
-        return new MeasuredFrequencyResponse(source, omegaRadPerSec.clone(), real.clone(), imaginary.clone(),
+        return new MeasuredFrequencyResponse(source, omegaRadPerSec, real, imaginary,
                 coherence == null ? null : coherence.clone());
     }
 
@@ -143,30 +141,35 @@ public final class MeasuredFrequencyResponse {
         return source;
     }
 
+    /** The measured points as a frequency response, the same type the engine computes. */
+    public FrequencyResponse response() {
+        return response;
+    }
+
     public int size() {
-        return omega.length;
+        return response.size();
     }
 
     /** Angular frequency of point i, rad/s. */
     public double omega(int i) {
-        return omega[i];
+        return response.omega(i);
     }
 
     public double real(int i) {
-        return re[i];
+        return response.real(i);
     }
 
     public double imaginary(int i) {
-        return im[i];
+        return response.imaginary(i);
     }
 
     public double magnitude(int i) {
-        return Math.hypot(re[i], im[i]);
+        return response.magnitude(i);
     }
 
     /** Principal phase of point i, rad, (−π, π]. */
     public double phase(int i) {
-        return Math.atan2(im[i], re[i]);
+        return Math.atan2(response.imaginary(i), response.real(i));
     }
 
     /** Whether the file gave a coherence per point. */
@@ -180,25 +183,22 @@ public final class MeasuredFrequencyResponse {
     }
 
     public double[] omegas() {
-        return omega.clone();
+        return response.omegas();
     }
 
     public double[] magnitudes() {
-        double[] m = new double[omega.length];
+        double[] m = new double[size()];
         for (int i = 0; i < m.length; i++) {
             m[i] = magnitude(i);
         }
         return m;
     }
 
-    /** Phase in rad, unwrapped along frequency (jumps above π between neighbours removed), from the principal value. */
+    /** Phase in rad, unwrapped along frequency as {@link FrequencyResponse#unwrappedPhaseDeg()} does it. */
     public double[] unwrappedPhase() {
-        double[] p = new double[omega.length];
+        double[] p = response.unwrappedPhaseDeg();
         for (int i = 0; i < p.length; i++) {
-            p[i] = phase(i);
-            if (i > 0) {
-                p[i] = p[i - 1] + Math.IEEEremainder(p[i] - p[i - 1], 2 * Math.PI);
-            }
+            p[i] = Math.toRadians(p[i]);
         }
         return p;
     }

@@ -255,30 +255,23 @@ public final class PlantFit {
                     + " fit did not converge (" + e.getMessage() + "); narrow the band or try the other model", e);
         }
         Trial best = problem.decode(optimum.getPoint().toArray());
-        return result(problem, measured.source(), best, optimum.getIterations(), optimum.getEvaluations());
+        return result(problem, measured, best, optimum.getIterations(), optimum.getEvaluations());
     }
 
-    private static PlantFitResult result(Problem problem, MeasurementSource source, Trial t, int iterations,
+    private static PlantFitResult result(Problem problem, MeasuredFrequencyResponse measured, Trial t, int iterations,
             int evaluations) {
-        Problem unweighted = new Problem(problem.model, problem.options, problem.omega, problem.measuredRe,
-                problem.measuredIm, filled(problem.omega.length, 1.0));
-        double[] r = unweighted.residuals(t);
-        double sumMag = 0;
-        double sumPhase = 0;
-        for (int i = 0; i < problem.omega.length; i++) {
-            sumMag += r[2 * i] * r[2 * i];
-            sumPhase += r[2 * i + 1] * r[2 * i + 1];
-        }
-        int n = problem.omega.length;
         Optional<TwoMassParameters> twoMass = Optional.empty();
         if (problem.twoMass()) {
             twoMass = Optional.of(new TwoMassParameters(t.motorInertia(), t.loadInertia(), t.stiffness(), t.damping(),
                     t.dampingRatio(), Resonance.ofTwoMass(t.stiffness(), t.motorInertia(), t.loadInertia())));
         }
-        return new PlantFitResult(problem.model, source, t.inertia(), t.viscous(), twoMass, t.deadTime(),
-                problem.options.currentLoopBandwidth(), Math.sqrt((sumMag + sumPhase) / n),
-                20 / Math.log(10) * Math.sqrt(sumMag / n), Math.toDegrees(Math.sqrt(sumPhase / n)), iterations,
-                evaluations, n);
+        double wi = problem.options.currentLoopBandwidth();
+        // The fit's figures of merit: the plain comparison of the fitted response with the points it saw.
+        ResponseComparison quality = ResponseComparison.of(measured, PlantFitResult.withDrive(
+                PlantFitResult.mechanics(t.inertia(), t.viscous(), twoMass), wi, t.deadTime()),
+                problem.options.minOmega(), problem.options.maxOmega());
+        return new PlantFitResult(problem.model, measured.source(), t.inertia(), t.viscous(), twoMass, t.deadTime(), wi,
+                quality, iterations, evaluations);
     }
 
     /** √coherence · √(share of the log-frequency axis), normalised to a mean square of 1. */
@@ -430,9 +423,4 @@ public final class PlantFit {
         return Math.max(lo, Math.min(hi, x));
     }
 
-    private static double[] filled(int n, double value) {
-        double[] a = new double[n];
-        Arrays.fill(a, value);
-        return a;
-    }
 }

@@ -15,21 +15,25 @@ import org.tracewell.engine.tf.TransferFunction;
  * @param twoMass              motor/load split, stiffness, damping and the mode; empty for the rigid model
  * @param deadTime             fitted pure dead time, s (0 when not fitted)
  * @param currentLoopBandwidth the current-loop bandwidth the fit assumed, rad/s (+∞: ideal)
- * @param residualRms          root mean square of the complex log error |ln(G_fit/G_measured)| over the points
- *                             used (unweighted; 0.01 ≈ 1 % magnitude or 0.57° phase)
- * @param magnitudeRmsDb       rms magnitude error, dB
- * @param phaseRmsDeg          rms phase error, degrees
+ * @param quality              the fitted response against the measured points it was fitted to (unweighted)
  * @param iterations           Levenberg–Marquardt iterations
  * @param evaluations          model evaluations (Jacobians by finite differences included)
- * @param pointsUsed           measured points inside the fit band
  */
 public record PlantFitResult(PlantFitModel model, MeasurementSource source, double totalInertia, double viscousDamping,
-        Optional<TwoMassParameters> twoMass, double deadTime, double currentLoopBandwidth, double residualRms,
-        double magnitudeRmsDb, double phaseRmsDeg, int iterations, int evaluations, int pointsUsed) {
+        Optional<TwoMassParameters> twoMass, double deadTime, double currentLoopBandwidth, ResponseComparison quality,
+        int iterations, int evaluations) {
 
     /** ω_M/T of the fitted mechanics, rad/s per N·m, delay-free and without the current loop. */
     public TransferFunction mechanics() {
-        double b = viscousDamping;
+        return mechanics(totalInertia, viscousDamping, twoMass);
+    }
+
+    /** The whole fitted response: current-loop lag, mechanics and the dead time (exact). */
+    public TransferFunction torqueCommandToMotorVelocity() {
+        return withDrive(mechanics(), currentLoopBandwidth, deadTime);
+    }
+
+    static TransferFunction mechanics(double totalInertia, double b, Optional<TwoMassParameters> twoMass) {
         if (twoMass.isEmpty()) {
             return TransferFunction.of(Polynomial.ONE, Polynomial.ofAscending(b, totalInertia));
         }
@@ -43,10 +47,10 @@ public record PlantFitResult(PlantFitModel model, MeasurementSource source, doub
         return TransferFunction.of(numerator, denominator);
     }
 
-    /** The whole fitted response: current-loop lag, mechanics and the dead time (exact). */
-    public TransferFunction torqueCommandToMotorVelocity() {
+    /** Current-loop lag 1/(s/ω_i + 1) in front of {@code mechanics}, and a dead time. */
+    static TransferFunction withDrive(TransferFunction mechanics, double currentLoopBandwidth, double deadTime) {
         Polynomial lag = Double.isInfinite(currentLoopBandwidth) ? Polynomial.ONE
                 : Polynomial.ofAscending(1.0, 1.0 / currentLoopBandwidth);
-        return TransferFunction.of(Polynomial.ONE, lag).series(mechanics()).withDelay(deadTime);
+        return TransferFunction.of(Polynomial.ONE, lag).series(mechanics).withDelay(deadTime);
     }
 }

@@ -24,12 +24,14 @@ import org.tracewell.engine.axis.TwoMassScrewDrive;
  *
  * @param previous the axis's plant before
  * @param updated  the plant with the fit applied
- * @param changes  what changed, old → new, in SI, one entry per parameter; notes on what was kept
+ * @param changes  what changed, before → after, SI, one entry per parameter
+ * @param notes    what was kept or replaced and why, and where the dead time belongs
  */
-public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> changes) {
+public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<ParameterChange> changes, List<String> notes) {
 
     public PlantUpdate {
         changes = List.copyOf(changes);
+        notes = List.copyOf(notes);
     }
 
     /** Applies {@code fit} to {@code current}; the fit must have assumed the plant's own current-loop bandwidth. */
@@ -38,16 +40,16 @@ public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> ch
             throw new IllegalArgumentException("the fit assumed a current-loop bandwidth of " + fit.currentLoopBandwidth()
                     + " rad/s but the plant has " + current.currentLoopBandwidth() + " rad/s; fit with the plant's own");
         }
-        List<String> changes = new ArrayList<>();
+        Changes changes = new Changes();
         AxisPlant updated = fit.twoMass().isPresent() ? twoMass(current, fit, changes) : rigid(current, fit, changes);
         if (fit.deadTime() > 0) {
-            changes.add(String.format(Locale.ROOT, "fitted dead time %.4g s is not part of the plant; compare it with"
-                    + " the controller's sample periods", fit.deadTime()));
+            changes.notes.add(String.format(Locale.ROOT, "fitted dead time %.4g s is not part of the plant; compare it"
+                    + " with the controller's sample periods", fit.deadTime()));
         }
-        return new PlantUpdate(current, updated, changes);
+        return new PlantUpdate(current, updated, changes.changes, changes.notes);
     }
 
-    private static AxisPlant rigid(AxisPlant current, PlantFitResult fit, List<String> changes) {
+    private static AxisPlant rigid(AxisPlant current, PlantFitResult fit, Changes changes) {
         double rho = current.loadPerMotorRadian();
         double j = fit.totalInertia();
         double b = fit.viscousDamping();
@@ -99,7 +101,7 @@ public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> ch
                     double mass = (j - rest) / (rho * rho);
                     change(changes, "load mass", s.loadMass(), mass, "kg");
                     change(changes, "viscous friction", s.viscousFriction(), b / (rho * rho), "N·s/m");
-                    changes.add("stiffness chain and axial damping kept: a rigid fit does not see the resonance");
+                    changes.notes.add("stiffness chain and axial damping kept: a rigid fit does not see the resonance");
                     return new TwoMassScrewDrive(s.motor(), s.screwInertia(), mass, s.lead(), s.gearRatio(),
                             s.stiffnessChain(), s.nutPosition(), s.axialDamping(), b / (rho * rho),
                             s.coulombFriction());
@@ -113,7 +115,7 @@ public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> ch
         }
     }
 
-    private static AxisPlant twoMass(AxisPlant current, PlantFitResult fit, List<String> changes) {
+    private static AxisPlant twoMass(AxisPlant current, PlantFitResult fit, Changes changes) {
         TwoMassParameters t = fit.twoMass().orElseThrow();
         if (!(current instanceof TwoMassScrewDrive s)) {
             return explicit(current, fit, changes, "a " + kind(current) + " has no two-mass parameters");
@@ -140,8 +142,9 @@ public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> ch
         double mass = t.loadInertia() / rho2;
         change(changes, "motor inertia", s.motor().inertia(), motorInertia, "kg·m²");
         change(changes, "load mass", s.loadMass(), mass, "kg");
-        change(changes, "nut stiffness (so that the chain gives the fitted axial stiffness at the nut position "
-                + s.nutPosition() + " m)", chain.nutStiffness(), 1 / nutCompliance, "N/m");
+        change(changes, "nut stiffness", chain.nutStiffness(), 1 / nutCompliance, "N/m");
+        changes.notes.add(String.format(Locale.ROOT, "the nut stiffness is set so that screw, nut and bearings give the"
+                + " fitted axial stiffness %.4g N/m at the nut position %.4g m", axial, s.nutPosition()));
         change(changes, "axial damping", s.axialDamping(), t.damping() / rho2, "N·s/m");
         change(changes, "viscous friction", s.viscousFriction(), fit.viscousDamping() / rho2, "N·s/m");
         DriveMotor motor = new DriveMotor(motorInertia, s.motor().torqueConstant(), s.motor().currentLoopBandwidth());
@@ -149,8 +152,8 @@ public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> ch
                 t.damping() / rho2, fit.viscousDamping() / rho2, s.coulombFriction());
     }
 
-    private static AxisPlant explicit(AxisPlant current, PlantFitResult fit, List<String> changes, String why) {
-        changes.add("replaced by an explicit transfer-function plant (" + why + "); ratio, torque constant, current"
+    private static AxisPlant explicit(AxisPlant current, PlantFitResult fit, Changes changes, String why) {
+        changes.notes.add("replaced by an explicit transfer-function plant (" + why + "); ratio, torque constant, current"
                 + " loop and Coulomb friction kept");
         change(changes, "equivalent inertia", current.equivalentInertia(), fit.totalInertia(), "kg·m²");
         return new TransferFunctionPlant(fit.mechanics(), current.loadPerMotorRadian(), fit.totalInertia(),
@@ -161,7 +164,13 @@ public record PlantUpdate(AxisPlant previous, AxisPlant updated, List<String> ch
         return plant.getClass().getSimpleName();
     }
 
-    private static void change(List<String> changes, String what, double before, double after, String unit) {
-        changes.add(String.format(Locale.ROOT, "%s: %.4g → %.4g %s", what, before, after, unit));
+    private static void change(Changes changes, String what, double before, double after, String unit) {
+        changes.changes.add(new ParameterChange(what, before, after, unit));
+    }
+
+    /** Collects changes and notes while the update is built. */
+    private static final class Changes {
+        final List<ParameterChange> changes = new ArrayList<>();
+        final List<String> notes = new ArrayList<>();
     }
 }

@@ -130,7 +130,7 @@ class PlantFitTest {
             relative(b, fit.viscousDamping(), 1e-4, "b"); // its corner b/J ≈ 0.15 Hz lies below the band
             relative(td, fit.deadTime(), 1e-5, "T_d");
             relative(y.resonanceModel().resonanceRadPerSec(), t.resonance().resonanceRadPerSec(), 1e-6, "ω_r");
-            assertTrue(fit.residualRms() < 1e-8, "residual " + fit.residualRms());
+            assertTrue(fit.quality().logErrorRms() < 1e-8, "residual " + fit.quality().logErrorRms());
             assertTrue(fit.iterations() > 0 && fit.iterations() < 100, "iterations " + fit.iterations());
         }
     }
@@ -156,7 +156,7 @@ class PlantFitTest {
             relative(0.03, t.dampingRatio(), 0.1, "ζ seed " + seed);
             relative(250e-6, fit.deadTime(), 0.1, "T_d seed " + seed);
             // the residual is the noise itself: √(0.02² + 0.02²) ≈ 0.028
-            assertEquals(0.028, fit.residualRms(), 0.005, "residual seed " + seed);
+            assertEquals(0.028, fit.quality().logErrorRms(), 0.005, "residual seed " + seed);
         }
     }
 
@@ -206,14 +206,32 @@ class PlantFitTest {
         relative(y.axialDamping(), back.axialDamping(), 1e-4, "axial damping");
         relative(600, back.viscousFriction(), 1e-3, "viscous friction");
         assertEquals(6.9e-4, back.screwInertia(), 0);
-        assertTrue(update.changes().stream().anyMatch(s -> s.startsWith("load mass: 180.0 → 180.0 kg")),
-                update.changes().toString());
+        ParameterChange load = update.changes().stream().filter(c -> c.parameter().equals("load mass")).findFirst()
+                .orElseThrow();
+        assertEquals(180, load.before(), 0);
+        assertEquals(0, load.relativeChange(), 1e-5);
+        assertEquals("kg", load.unit());
         // A rack drive has no two-mass parameters: the fit is offered as an explicit plant with the rack's ratio.
         PlantUpdate onRack = PlantUpdate.of(new RackAndPinionDrive(new DriveMotor(8e-4, 1.1, y.currentLoopBandwidth()),
                 6e-3, 0.03183, 10, 210, 250, 120), fit);
         TransferFunctionPlant explicit = assertInstanceOf(TransferFunctionPlant.class, onRack.updated());
         assertEquals(0.003183, explicit.ratio(), 1e-15);
         relative(y.equivalentInertia(), explicit.equivalentInertia(), 1e-6, "inertia");
+    }
+
+    @Test
+    void comparisonOfAResponseWithItselfIsZeroAndAGainErrorShowsInDecibels() {
+        RackAndPinionDrive x = rackAxis();
+        double[] w = grid(50);
+        TransferFunction g = x.torqueCommandToMotorVelocity();
+        MeasuredFrequencyResponse m = measured(w, engineResponse(g, w), 0, 1);
+        assertEquals(0, ResponseComparison.of(m, g).logErrorRms(), 1e-12);
+        ResponseComparison off = ResponseComparison.of(m, g.series(TransferFunction.gain(1.1)));
+        // 20·log10(1.1) = 0.8279 dB, ln 1.1 = 0.09531, no phase error (definition of the decibel)
+        assertEquals(0.8279, off.magnitudeRmsDb(), 1e-4);
+        assertEquals(Math.log(1.1), off.logErrorRms(), 1e-12);
+        assertEquals(0, off.phaseRmsDeg(), 1e-9);
+        assertEquals(50, off.points());
     }
 
     @Test
