@@ -14,8 +14,6 @@ import java.util.List;
 import javax.imageio.ImageIO;
 
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.annotations.XYAnnotation;
-import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
@@ -78,21 +76,10 @@ class MeasuredOverlayTest {
         assertThrows(IllegalArgumentException.class, () -> BodeChart.create("e", List.of(), List.of(), Margins.NONE));
     }
 
-    /** ρ − R = offset + half·cos 2θ over a full turn, n samples. */
-    private static CircleRun run(String label, double offset, double half, int n) {
-        double[] a = new double[n];
-        double[] d = new double[n];
-        for (int i = 0; i < n; i++) {
-            a[i] = 2 * Math.PI * i / n;
-            d[i] = offset + half * Math.cos(2 * a[i]);
-        }
-        return new CircleRun(label, a, d, 2 * half, Math.abs(offset) + half);
-    }
-
     @Test
     void circleOverlayDrawsMeasuredRunsOnTheSameRingScale() throws IOException {
-        CircleRun predicted = run("CCW", -0.3e-6, 0.1e-6, 3600);
-        CircleRun measured = run("measured CCW", -4e-6, 3e-6, 720);
+        CircleRun predicted = ReviewChartsTest.ellipticRun("CCW", -0.3e-6, 0.1e-6, 3600);
+        CircleRun measured = ReviewChartsTest.ellipticRun("measured CCW", -4e-6, 3e-6, 720);
         JFreeChart chart = CircleTestChart.create("XY circle", 0.1, List.of(predicted), Double.NaN, List.of(measured),
                 7.5e-6, ReversalPoint.quadrants("X1", "Y"), "X1", "Y");
         XYPlot plot = chart.getXYPlot();
@@ -110,21 +97,11 @@ class MeasuredOverlayTest {
         assertEquals(expected, runs.getXValue(1, 0), 1e-9);
         assertEquals(0, runs.getYValue(1, 0), 1e-9);
         assertEquals(720, runs.getItemCount(1), "below the display limit: every sample kept");
-        String notes = texts(plot);
+        String notes = ReviewChartsTest.texts(plot);
         assertTrue(notes.contains("measured CCW:  G 6.00 µm,  F 7.00 µm"), notes);
         assertTrue(notes.contains("measured G(b) 7.50 µm"), notes);
         assertEquals(8, plot.getDataset(1).getItemCount(0), "4 reversal marks on each of the 2 runs");
         BufferedImage image = ImageIO.read(new ByteArrayInputStream(ChartExport.png(chart, 760, 840)));
         assertEquals(840, image.getHeight());
-    }
-
-    private static String texts(XYPlot plot) {
-        StringBuilder b = new StringBuilder();
-        for (XYAnnotation a : plot.getAnnotations()) {
-            if (a instanceof XYTextAnnotation t) {
-                b.append(t.getText()).append('\n');
-            }
-        }
-        return b.toString();
     }
 }
