@@ -27,23 +27,25 @@ public final class BodeChart {
     }
 
     public static JFreeChart create(String title, List<FrequencySeries> series, Margins margins) {
-        if (series.isEmpty()) {
+        return create(title, series, List.of(), margins);
+    }
+
+    /**
+     * Predicted responses drawn as lines and measured ones as points over them, on the same axes: the chart's
+     * convention for "measured against predicted".
+     *
+     * @param predicted responses computed from the model (lines); may be empty when {@code measured} is not
+     * @param measured  measured responses (points), series after the predicted ones in the same datasets
+     */
+    public static JFreeChart create(String title, List<FrequencySeries> predicted, List<FrequencySeries> measured,
+            Margins margins) {
+        if (predicted.isEmpty() && measured.isEmpty()) {
             throw new IllegalArgumentException("a Bode chart needs at least one frequency response");
         }
         XYSeriesCollection magnitude = new XYSeriesCollection();
         XYSeriesCollection phase = new XYSeriesCollection();
-        for (FrequencySeries s : series) {
-            double[] hz = new double[s.omegaRadPerSec().length];
-            double[] db = new double[hz.length];
-            double[] deg = new double[hz.length];
-            for (int i = 0; i < hz.length; i++) {
-                hz[i] = Units.hertz(s.omegaRadPerSec()[i]);
-                db[i] = Units.decibels(s.magnitude()[i]);
-                deg[i] = Math.toDegrees(s.phaseRad()[i]);
-            }
-            magnitude.addSeries(xySeries(s.name(), Decimation.minMax(hz, db, COLUMNS, true)));
-            phase.addSeries(xySeries(s.name(), Decimation.minMax(hz, deg, COLUMNS, true)));
-        }
+        addResponses(predicted, magnitude, phase);
+        addResponses(measured, magnitude, phase);
 
         LogAxis frequency = new PlainLabelLogAxis("Frequency (Hz)");
         frequency.setSmallestValue(1e-6);
@@ -57,9 +59,15 @@ public final class BodeChart {
 
         XYPlot magPlot = new XYPlot(magnitude, null, new NumberAxis("Magnitude (dB)"), lines());
         magPlot.addRangeMarker(limitMarker(0, null));
-        XYPlot phasePlot = new XYPlot(phase, null, new NumberAxis("Phase (°)"), lines());
+        XYLineAndShapeRenderer phaseLines = lines();
+        phaseLines.setDefaultSeriesVisibleInLegend(false); // the magnitude plot's legend items name every series
+        XYPlot phasePlot = new XYPlot(phase, null, new NumberAxis("Phase (°)"), phaseLines);
         ((NumberAxis) phasePlot.getRangeAxis()).setAutoRangeIncludesZero(false);
         phasePlot.addRangeMarker(limitMarker(-180, null));
+        for (int i = predicted.size(); i < predicted.size() + measured.size(); i++) {
+            ChartStyle.showAsMeasured((XYLineAndShapeRenderer) magPlot.getRenderer(), i);
+            ChartStyle.showAsMeasured((XYLineAndShapeRenderer) phasePlot.getRenderer(), i);
+        }
         plot.add(magPlot, 3);
         plot.add(phasePlot, 2);
 
@@ -79,8 +87,25 @@ public final class BodeChart {
             magPlot.addDomainMarker(noteMarker(hz, text));
             phasePlot.addDomainMarker(noteMarker(hz, null));
         }
-        JFreeChart chart = new JFreeChart(title, ChartStyle.TITLE_FONT, plot, series.size() > 1);
+        JFreeChart chart = new JFreeChart(title, ChartStyle.TITLE_FONT, plot, predicted.size() + measured.size() > 1);
         return ChartStyle.apply(chart);
+    }
+
+    /** Hz, dB and degrees of each response into the two collections, decimated to the display resolution. */
+    private static void addResponses(List<FrequencySeries> series, XYSeriesCollection magnitude,
+            XYSeriesCollection phase) {
+        for (FrequencySeries s : series) {
+            double[] hz = new double[s.omegaRadPerSec().length];
+            double[] db = new double[hz.length];
+            double[] deg = new double[hz.length];
+            for (int i = 0; i < hz.length; i++) {
+                hz[i] = Units.hertz(s.omegaRadPerSec()[i]);
+                db[i] = Units.decibels(s.magnitude()[i]);
+                deg[i] = Math.toDegrees(s.phaseRad()[i]);
+            }
+            magnitude.addSeries(xySeries(s.name(), Decimation.minMax(hz, db, COLUMNS, true)));
+            phase.addSeries(xySeries(s.name(), Decimation.minMax(hz, deg, COLUMNS, true)));
+        }
     }
 
     static XYSeries xySeries(String name, Decimation.XY xy) {

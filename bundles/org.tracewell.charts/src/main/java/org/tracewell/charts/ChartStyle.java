@@ -4,13 +4,16 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.Paint;
+import java.awt.Shape;
 import java.awt.Stroke;
+import java.awt.geom.Ellipse2D;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYItemRenderer;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.text.TextUtils;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
@@ -61,7 +64,17 @@ public final class ChartStyle {
         TextUtils.setUseDrawRotatedStringWorkaround(false);
     }
 
+    /** Marker of a measured series: measured data reads as samples over the predicted lines. */
+    static final Shape MEASURED_SHAPE = new Ellipse2D.Double(-2, -2, 4, 4);
+
     private ChartStyle() {
+    }
+
+    /** Draws series {@code series} of {@code renderer} as measured data: points, no line, its own colour. */
+    public static void showAsMeasured(XYLineAndShapeRenderer renderer, int series) {
+        renderer.setSeriesLinesVisible(series, false);
+        renderer.setSeriesShapesVisible(series, true);
+        renderer.setSeriesShape(series, MEASURED_SHAPE);
     }
 
     /** The colour of series number {@code index} (cycles). */

@@ -4,6 +4,7 @@ import java.awt.BasicStroke;
 import java.awt.Font;
 import java.awt.Shape;
 import java.awt.geom.Path2D;
+import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -48,18 +49,35 @@ public final class CircleTestChart {
      */
     public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
             List<ReversalPoint> reversals, String uLabel, String vLabel) {
+        return create(title, nominalRadiusM, runs, bidirectionalG, List.of(), Double.NaN, reversals, uLabel, vLabel);
+    }
+
+    /**
+     * Predicted runs drawn as lines and measured runs as points, on one ring scale that holds both.
+     *
+     * @param runs                   predicted runs (lines); may be empty when {@code measured} is not
+     * @param bidirectionalG         G(b) of the predicted runs, metres; NaN when not evaluated
+     * @param measured               measured runs (points), series after the predicted runs in the same dataset;
+     *                               their labels must differ from the predicted ones (e.g. "measured CW")
+     * @param measuredBidirectionalG G(b) of the measured runs, metres; NaN when not evaluated
+     */
+    public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
+            List<CircleRun> measured, double measuredBidirectionalG, List<ReversalPoint> reversals, String uLabel,
+            String vLabel) {
         if (!(nominalRadiusM > 0) || !Double.isFinite(nominalRadiusM)) {
             throw new IllegalArgumentException("nominal radius must be finite and > 0 m, got " + nominalRadiusM);
         }
-        if (runs.isEmpty()) {
+        if (runs.isEmpty() && measured.isEmpty()) {
             throw new IllegalArgumentException("a circle-test plot needs at least one run");
         }
-        Scale scale = scale(nominalRadiusM, runs);
+        List<CircleRun> all = new ArrayList<>(runs);
+        all.addAll(measured);
+        Scale scale = scale(nominalRadiusM, all);
         double radiusMm = nominalRadiusM * 1e3;
 
         XYSeriesCollection runData = new XYSeriesCollection();
         XYSeries reversalSeries = new XYSeries("axis reversal", false, true);
-        for (CircleRun run : runs) {
+        for (CircleRun run : all) {
             XYSeries s = new XYSeries(run.label(), false, true);
             int[] keep = ContourDeviationChart.displayIndices(run.radialDeviation(), RUN_POINTS);
             for (int k : keep) {
@@ -90,6 +108,9 @@ public final class CircleTestChart {
         }
 
         XYLineAndShapeRenderer runRenderer = BodeChart.lines();
+        for (int i = runs.size(); i < all.size(); i++) {
+            ChartStyle.showAsMeasured(runRenderer, i);
+        }
         XYLineAndShapeRenderer ringRenderer = BodeChart.lines();
         ringRenderer.setDrawSeriesLineAsPath(true);
         for (int i = 0; i < rings.getSeriesCount(); i++) {
@@ -147,17 +168,11 @@ public final class CircleTestChart {
         plot.addAnnotation(directions);
 
         double lineHeight = radiusMm * 0.09;
-        int lineCount = runs.size() + (Double.isFinite(bidirectionalG) ? 1 : 0) + 1;
+        int lineCount = all.size() + (Double.isFinite(bidirectionalG) ? 1 : 0)
+                + (Double.isFinite(measuredBidirectionalG) ? 1 : 0) + 1;
         double y = lineHeight * (lineCount - 1) / 2.0;
-        for (CircleRun run : runs) {
-            plot.addAnnotation(centreText(run.label() + ":  G " + Units.format3(run.circularDeviationG() * 1e6)
-                    + " µm,  F " + Units.format3(run.radialDeviationF() * 1e6) + " µm", y, false));
-            y -= lineHeight;
-        }
-        if (Double.isFinite(bidirectionalG)) {
-            plot.addAnnotation(centreText("G(b) " + Units.format3(bidirectionalG * 1e6) + " µm", y, true));
-            y -= lineHeight;
-        }
+        y = figureLines(plot, runs, bidirectionalG, "G(b) ", y, lineHeight);
+        y = figureLines(plot, measured, measuredBidirectionalG, "measured G(b) ", y, lineHeight);
         plot.addAnnotation(centreText(scale.nominalShown() ? "rings every " + Units.format3(scale.stepM() * 1e6) + " µm"
                 : "nominal circle (0 µm) off scale; rings every " + Units.format3(scale.stepM() * 1e6) + " µm", y,
                 false));
@@ -165,7 +180,22 @@ public final class CircleTestChart {
         return ChartStyle.apply(new JFreeChart(fullTitle, ChartStyle.TITLE_FONT, plot, true));
     }
 
-    /** The ring scale {@link #create} uses for these runs. */
+    /** One centre line per run ("CW:  G … µm,  F … µm") and one for G(b) when given; returns the next line's y. */
+    private static double figureLines(XYPlot plot, List<CircleRun> runs, double bidirectionalG, String gbLabel,
+            double y, double lineHeight) {
+        for (CircleRun run : runs) {
+            plot.addAnnotation(centreText(run.label() + ":  G " + Units.format3(run.circularDeviationG() * 1e6)
+                    + " µm,  F " + Units.format3(run.radialDeviationF() * 1e6) + " µm", y, false));
+            y -= lineHeight;
+        }
+        if (Double.isFinite(bidirectionalG)) {
+            plot.addAnnotation(centreText(gbLabel + Units.format3(bidirectionalG * 1e6) + " µm", y, true));
+            y -= lineHeight;
+        }
+        return y;
+    }
+
+    /** The ring scale {@link #create} uses for these runs (predicted and measured together). */
     public static Scale scaleOf(double nominalRadiusM, List<CircleRun> runs) {
         return scale(nominalRadiusM, runs);
     }

@@ -103,7 +103,7 @@ class ReviewChartsTest {
     }
 
     /** A run whose radial deviation is offset + half · cos 2θ (an ellipse at 0°), sampled over 360°. */
-    private static CircleRun ellipticRun(String label, double offset, double half, int n) {
+    static CircleRun ellipticRun(String label, double offset, double half, int n) {
         double[] a = new double[n];
         double[] d = new double[n];
         for (int i = 0; i < n; i++) {
@@ -172,7 +172,7 @@ class ReviewChartsTest {
         assertThrows(IllegalArgumentException.class, () -> new BudgetBar("negative", -1e-6));
     }
 
-    private static String texts(XYPlot plot) {
+    static String texts(XYPlot plot) {
         StringBuilder all = new StringBuilder();
         for (XYAnnotation a : plot.getAnnotations()) {
             if (a instanceof XYTextAnnotation t) {

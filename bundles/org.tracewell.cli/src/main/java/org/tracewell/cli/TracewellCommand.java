@@ -26,6 +26,8 @@ public final class TracewellCommand {
         commands.put("loop", new Entry("analyse one loop given as transfer-function coefficients", LoopCommand::run));
         commands.put("validate", new Entry("check a machine or axis file against the model rules", ValidateCommand::run));
         commands.put("diff", new Entry("semantic difference of two versions of a machine file", DiffCommand::run));
+        commands.put("measured", new Entry("evaluate a measurement CSV (frf, circle, positioning) against the model",
+                MeasuredCommand::run));
     }
 
     public static void main(String[] args) {

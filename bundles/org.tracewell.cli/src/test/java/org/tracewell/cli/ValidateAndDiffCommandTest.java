@@ -45,7 +45,9 @@ class ValidateAndDiffCommandTest {
         Files.createDirectories(root.resolve("library"));
         try (var paths = Files.walk(examples())) {
             for (Path p : paths.filter(Files::isRegularFile).toList()) {
-                Files.copy(p, root.resolve(examples().relativize(p).toString()));
+                Path copy = root.resolve(examples().relativize(p).toString());
+                Files.createDirectories(copy.getParent()); // library/, measurements/
+                Files.copy(p, copy);
             }
         }
         Path target = root.resolve(file);

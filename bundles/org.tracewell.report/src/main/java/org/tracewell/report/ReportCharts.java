@@ -121,15 +121,7 @@ final class ReportCharts {
 
     /** Polar plot of the circle-test runs of a full-circle contour; empty when no run has a circle test. */
     static Optional<Magnified> circleTest(String title, ContourResult contour) {
-        List<CircleRun> runs = new ArrayList<>();
-        for (ContourRun run : contour.runs()) {
-            if (run.circleTest().isEmpty() || run.circleSetup().isEmpty()) {
-                continue;
-            }
-            CircleRun polar = polar(run.direction().label(), run.circleSetup().get(), run.circleTest().get(),
-                    run.contourError());
-            runs.add(polar);
-        }
+        List<CircleRun> runs = PredictedCircleRuns.of(contour);
         if (runs.isEmpty()) {
             return Optional.empty();
         }

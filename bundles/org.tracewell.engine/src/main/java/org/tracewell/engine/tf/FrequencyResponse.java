@@ -15,6 +15,16 @@ public final class FrequencyResponse {
         this.im = im;
     }
 
+    /** A response given point by point (e.g. measured); the arrays are copied and must have equal lengths. */
+    public static FrequencyResponse of(double[] omegaRadPerSec, double[] real, double[] imaginary) {
+        if (real.length != omegaRadPerSec.length || imaginary.length != omegaRadPerSec.length) {
+            throw new IllegalArgumentException("a frequency response needs one real and one imaginary part per"
+                    + " frequency: " + omegaRadPerSec.length + " frequencies, " + real.length + " real and "
+                    + imaginary.length + " imaginary parts");
+        }
+        return new FrequencyResponse(omegaRadPerSec.clone(), real.clone(), imaginary.clone());
+    }
+
     public int size() {
         return omega.length;
     }
