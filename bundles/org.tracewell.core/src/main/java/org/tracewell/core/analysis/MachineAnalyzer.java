@@ -11,6 +11,7 @@ import java.util.concurrent.CompletionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Supplier;
 
+import org.tracewell.core.analysis.AnalysisMemo.AxisAnalysis;
 import org.tracewell.core.mapping.MachineInputs;
 import org.tracewell.core.mapping.MappedAxis;
 import org.tracewell.core.mapping.MappedContour;
@@ -52,22 +53,29 @@ public final class MachineAnalyzer {
         return analyze(inputs, List.of(), progress, cancel);
     }
 
+    /** As {@link #analyze(MachineInputs, List, ProgressListener, CancellationFlag, AnalysisMemo)}, keeping nothing. */
+    public static MachineAnalysis analyze(MachineInputs inputs, List<String> contourNames, ProgressListener progress,
+            CancellationFlag cancel) {
+        return analyze(inputs, contourNames, progress, cancel, AnalysisMemo.none());
+    }
+
     /**
      * @param contourNames names (or ids) of the contours to analyse; empty = all
+     * @param memo         where axis analyses and contour runs of equal inputs are found instead of recomputed
      * @throws IllegalArgumentException when a named contour does not exist, or a contour's axis is missing
      * @throws AnalysisCancelledException when {@code cancel} is set while running
      */
     public static MachineAnalysis analyze(MachineInputs inputs, List<String> contourNames, ProgressListener progress,
-            CancellationFlag cancel) {
+            CancellationFlag cancel, AnalysisMemo memo) {
         List<MappedContour> contours = selectContours(inputs, contourNames);
         int total = inputs.axes().size() + contours.stream().mapToInt(c -> isFullCircle(c.path()) ? 2 : 1).sum();
         AtomicInteger done = new AtomicInteger();
 
-        Map<String, CompletableFuture<AxisWork>> axisWork = new LinkedHashMap<>();
+        Map<String, CompletableFuture<AxisAnalysis>> axisWork = new LinkedHashMap<>();
         for (MappedAxis axis : inputs.axes()) {
             axisWork.put(axis.id(), async(() -> {
                 cancel.throwIfCancelled("axis " + axis.name());
-                AxisWork work = new AxisWork(axis.model().analyze(), axis.model().toAxisLoop());
+                AxisAnalysis work = memo.axis(axis.model());
                 progress.progress("axis " + axis.name(), done.incrementAndGet(), total);
                 return work;
             }));
@@ -77,19 +85,19 @@ public final class MachineAnalyzer {
         for (MappedContour contour : contours) {
             MappedAxis first = axisOf(inputs, contour, contour.firstAxisId());
             MappedAxis second = axisOf(inputs, contour, contour.secondAxisId());
-            CompletableFuture<AxisWork> firstWork = axisWork.get(first.id());
-            CompletableFuture<AxisWork> secondWork = axisWork.get(second.id());
+            CompletableFuture<AxisAnalysis> firstWork = axisWork.get(first.id());
+            CompletableFuture<AxisAnalysis> secondWork = axisWork.get(second.id());
             Optional<CircleTestSetup> setup = circleSetup(contour);
             List<CompletableFuture<ContourRun>> runs = new ArrayList<>();
             if (setup.isPresent()) {
                 CircleTestSetup programmed = setup.get();
                 for (CircleTestSetup s : List.of(programmed, programmed.reversed())) {
                     runs.add(firstWork.thenCombineAsync(secondWork, (a, b) -> runCircle(contour, s, first, second,
-                            a.loop(), b.loop(), progress, done, total, cancel)));
+                            a.loop(), b.loop(), progress, done, total, cancel, memo)));
                 }
             } else {
                 runs.add(firstWork.thenCombineAsync(secondWork, (a, b) -> runProgrammed(contour, first, second,
-                        a.loop(), b.loop(), progress, done, total, cancel)));
+                        a.loop(), b.loop(), progress, done, total, cancel, memo)));
             }
             contourWork.add(new ContourWork(contour, first, second, setup, runs));
         }
@@ -168,28 +176,35 @@ public final class MachineAnalyzer {
 
     private static ContourRun runCircle(MappedContour contour, CircleTestSetup setup, MappedAxis first,
             MappedAxis second, AxisLoop firstLoop, AxisLoop secondLoop, ProgressListener progress, AtomicInteger done,
-            int total, CancellationFlag cancel) {
+            int total, CancellationFlag cancel, AnalysisMemo memo) {
         RunDirection direction = setup.direction() == ArcDirection.CW ? RunDirection.CW : RunDirection.CCW;
         cancel.throwIfCancelled("contour '" + contour.name() + "' " + direction.label());
-        Path path = setup.path();
-        TrackingResult tracking = track(contour, path, first, second, firstLoop, secondLoop);
-        ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, path, ContourErrorAnalysis.DEFAULT_WINDOW);
-        CircleTestResult circle = CircleTest.evaluate(setup, tracking);
+        ContourRun run = memo.run(AnalysisMemo.RunKey.circle(contour, setup, first, second), () -> {
+            Path path = setup.path();
+            TrackingResult tracking = track(contour, path, first, second, firstLoop, secondLoop);
+            ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, path,
+                    ContourErrorAnalysis.DEFAULT_WINDOW);
+            CircleTestResult circle = CircleTest.evaluate(setup, tracking);
+            return new ContourRun(direction, path, tracking, error, Optional.of(setup), Optional.of(circle),
+                    metrics(tracking, error, Optional.of(circle)));
+        });
         progress.progress("contour '" + contour.name() + "' " + direction.label(), done.incrementAndGet(), total);
-        return new ContourRun(direction, path, tracking, error, Optional.of(setup), Optional.of(circle),
-                metrics(tracking, error, Optional.of(circle)));
+        return run;
     }
 
     private static ContourRun runProgrammed(MappedContour contour, MappedAxis first, MappedAxis second,
             AxisLoop firstLoop, AxisLoop secondLoop, ProgressListener progress, AtomicInteger done, int total,
-            CancellationFlag cancel) {
+            CancellationFlag cancel, AnalysisMemo memo) {
         cancel.throwIfCancelled("contour '" + contour.name() + "'");
-        TrackingResult tracking = track(contour, contour.path(), first, second, firstLoop, secondLoop);
-        ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, contour.path(),
-                ContourErrorAnalysis.DEFAULT_WINDOW);
+        ContourRun run = memo.run(AnalysisMemo.RunKey.programmed(contour, first, second), () -> {
+            TrackingResult tracking = track(contour, contour.path(), first, second, firstLoop, secondLoop);
+            ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, contour.path(),
+                    ContourErrorAnalysis.DEFAULT_WINDOW);
+            return new ContourRun(RunDirection.PROGRAMMED, contour.path(), tracking, error, Optional.empty(),
+                    Optional.empty(), metrics(tracking, error, Optional.empty()));
+        });
         progress.progress("contour '" + contour.name() + "'", done.incrementAndGet(), total);
-        return new ContourRun(RunDirection.PROGRAMMED, contour.path(), tracking, error, Optional.empty(),
-                Optional.empty(), metrics(tracking, error, Optional.empty()));
+        return run;
     }
 
     private static TrackingResult track(MappedContour contour, Path path, MappedAxis first, MappedAxis second,
@@ -349,9 +364,6 @@ public final class MachineAnalyzer {
             }
             throw failed;
         }
-    }
-
-    private record AxisWork(AxisDynamics dynamics, AxisLoop loop) {
     }
 
     private record ContourWork(MappedContour contour, MappedAxis first, MappedAxis second,
