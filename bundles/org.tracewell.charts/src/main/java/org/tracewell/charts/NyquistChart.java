@@ -74,7 +74,6 @@ public final class NyquistChart {
         data.addSeries(circle("unit circle |L| = 1", 0, 0, 1));
 
         XYLineAndShapeRenderer renderer = BodeChart.lines();
-        renderer.setDrawSeriesLineAsPath(true);
         renderer.setSeriesPaint(CURVE, ChartStyle.seriesPaint(0));
         Color mirrorPaint = (Color) ChartStyle.seriesPaint(0);
         renderer.setSeriesPaint(MIRROR, new Color(mirrorPaint.getRed(), mirrorPaint.getGreen(), mirrorPaint.getBlue(), 110));

@@ -32,6 +32,9 @@ public final class TrackingChart {
         XYSeriesCollection errors = new XYSeriesCollection();
         XYLineAndShapeRenderer positionLines = BodeChart.lines();
         XYLineAndShapeRenderer errorLines = BodeChart.lines();
+        // Each series as one path: several times faster to draw than thousands of dashed segments (measured).
+        positionLines.setDrawSeriesLineAsPath(true);
+        errorLines.setDrawSeriesLineAsPath(true);
         for (int a = 0; a < axes.size(); a++) {
             AxisTrack axis = axes.get(a);
             double[] t = TimeChart.scaled(axis.timeSeconds(), timeScale.factorFromSi());
