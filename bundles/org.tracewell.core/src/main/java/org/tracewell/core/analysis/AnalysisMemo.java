@@ -30,23 +30,26 @@ import org.tracewell.engine.trajectory.PathLimits;
  */
 public final class AnalysisMemo {
 
-    /** One axis's loops analysed and its closed loop for simulation: a pure function of the {@link AxisModel}. */
-    public record AxisAnalysis(AxisDynamics dynamics, AxisLoop loop) {
-    }
-
     private static final AnalysisMemo NONE = new AnalysisMemo(0, 0);
 
-    private final Store<AxisModel, AxisAnalysis> axes;
+    private final Store<AxisModel, AxisDynamics> axes;
+    private final Store<AxisModel, AxisLoop> loops;
     private final Store<RunKey, ContourRun> runs;
 
     private AnalysisMemo(int axisCapacity, int runCapacity) {
         axes = new Store<>(axisCapacity);
+        loops = new Store<>(axisCapacity);
         runs = new Store<>(runCapacity);
     }
 
-    /** Keeps nothing: every request computes (what a one-off analysis wants). */
+    /** Keeps nothing across analyses (one analysis still shares its own runs and axes within itself). */
     public static AnalysisMemo none() {
         return NONE;
+    }
+
+    /** True for {@link #none()}. */
+    boolean keepsNothing() {
+        return this == NONE;
     }
 
     /**
@@ -61,9 +64,14 @@ public final class AnalysisMemo {
         return new AnalysisMemo(axisCapacity, runCapacity);
     }
 
-    /** Both loops of {@code model} analysed, and its closed loop; computed unless an equal model was analysed. */
-    public AxisAnalysis axis(AxisModel model) {
-        return axes.get(model, () -> new AxisAnalysis(model.analyze(), model.toAxisLoop()));
+    /** Both loops of {@code model} analysed ({@link AxisModel#analyze()}); computed unless an equal model was. */
+    public AxisDynamics dynamics(AxisModel model) {
+        return axes.get(model, model::analyze);
+    }
+
+    /** The closed loop of {@code model} for simulation ({@link AxisModel#toAxisLoop()}); cheap, kept all the same. */
+    public AxisLoop loop(AxisModel model) {
+        return loops.get(model, model::toAxisLoop);
     }
 
     /** How many axis analyses were computed (not found) so far. */

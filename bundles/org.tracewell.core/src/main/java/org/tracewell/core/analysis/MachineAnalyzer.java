@@ -11,7 +11,6 @@ import java.util.concurrent.CompletionException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.Supplier;
 
-import org.tracewell.core.analysis.AnalysisMemo.AxisAnalysis;
 import org.tracewell.core.mapping.MachineInputs;
 import org.tracewell.core.mapping.MappedAxis;
 import org.tracewell.core.mapping.MappedContour;
@@ -71,49 +70,63 @@ public final class MachineAnalyzer {
         int total = inputs.axes().size() + contours.stream().mapToInt(c -> isFullCircle(c.path()) ? 2 : 1).sum();
         AtomicInteger done = new AtomicInteger();
 
-        Map<String, CompletableFuture<AxisAnalysis>> axisWork = new LinkedHashMap<>();
-        for (MappedAxis axis : inputs.axes()) {
-            axisWork.put(axis.id(), async(() -> {
-                cancel.throwIfCancelled("axis " + axis.name());
-                AxisAnalysis work = memo.axis(axis.model());
-                progress.progress("axis " + axis.name(), done.incrementAndGet(), total);
-                return work;
-            }));
-        }
+        // Without a memo of the caller's, one for this analysis: a run two contours share is simulated once, and the
+        // calling thread and the pool never analyse the same axis twice.
+        AnalysisMemo work = memo.keepsNothing()
+                ? AnalysisMemo.bounded(inputs.axes().size() + 1, 2 * contours.size() + 1) : memo;
 
+        // The runs need only each axis's closed loop (cheap), not its analysed dynamics: they start at once, in the
+        // pool, while the dynamics are analysed alongside.
+        Map<String, AxisLoop> loops = new LinkedHashMap<>();
+        for (MappedAxis axis : inputs.axes()) {
+            loops.put(axis.id(), work.loop(axis.model()));
+        }
         List<ContourWork> contourWork = new ArrayList<>();
         for (MappedContour contour : contours) {
             MappedAxis first = axisOf(inputs, contour, contour.firstAxisId());
             MappedAxis second = axisOf(inputs, contour, contour.secondAxisId());
-            CompletableFuture<AxisAnalysis> firstWork = axisWork.get(first.id());
-            CompletableFuture<AxisAnalysis> secondWork = axisWork.get(second.id());
+            AxisLoop firstLoop = loops.get(first.id());
+            AxisLoop secondLoop = loops.get(second.id());
             Optional<CircleTestSetup> setup = circleSetup(contour);
             List<CompletableFuture<ContourRun>> runs = new ArrayList<>();
             if (setup.isPresent()) {
                 CircleTestSetup programmed = setup.get();
                 for (CircleTestSetup s : List.of(programmed, programmed.reversed())) {
-                    runs.add(firstWork.thenCombineAsync(secondWork, (a, b) -> runCircle(contour, s, first, second,
-                            a.loop(), b.loop(), progress, done, total, cancel, memo)));
+                    runs.add(async(() -> runCircle(contour, s, first, second, firstLoop, secondLoop, progress, done,
+                            total, cancel, work)));
                 }
             } else {
-                runs.add(firstWork.thenCombineAsync(secondWork, (a, b) -> runProgrammed(contour, first, second,
-                        a.loop(), b.loop(), progress, done, total, cancel, memo)));
+                runs.add(async(() -> runProgrammed(contour, first, second, firstLoop, secondLoop, progress, done,
+                        total, cancel, work)));
             }
             contourWork.add(new ContourWork(contour, first, second, setup, runs));
         }
 
+        // Axis dynamics: queued behind the runs, last axis first, while this thread works from the first axis; the
+        // memo hands each axis to whichever gets there first (on two cores: runs in the pool, dynamics here).
+        Map<String, CompletableFuture<AxisDynamics>> queued = new LinkedHashMap<>();
+        List<MappedAxis> reversed = new ArrayList<>(inputs.axes());
+        java.util.Collections.reverse(reversed);
+        for (MappedAxis axis : reversed) {
+            queued.put(axis.id(), async(() -> dynamics(axis, work, cancel, progress, done, total)));
+        }
+        Map<String, AxisDynamics> dynamics = new LinkedHashMap<>();
+        for (MappedAxis axis : inputs.axes()) {
+            dynamics.put(axis.id(), dynamics(axis, work, cancel, progress, null, total));
+        }
+        for (CompletableFuture<AxisDynamics> q : queued.values()) {
+            join(q);
+        }
+
         List<ContourResult> contourResults = new ArrayList<>();
-        for (ContourWork work : contourWork) {
-            List<ContourRun> runs = work.runs().stream().map(MachineAnalyzer::join).toList();
-            AxisDynamics a = join(axisWork.get(work.first().id())).dynamics();
-            AxisDynamics b = join(axisWork.get(work.second().id())).dynamics();
-            contourResults.add(contourResult(work, runs, a, b));
+        for (ContourWork w : contourWork) {
+            List<ContourRun> runs = w.runs().stream().map(MachineAnalyzer::join).toList();
+            contourResults.add(contourResult(w, runs, dynamics.get(w.first().id()), dynamics.get(w.second().id())));
         }
 
         List<AxisResult> axisResults = new ArrayList<>();
         for (MappedAxis axis : inputs.axes()) {
-            AxisDynamics dynamics = join(axisWork.get(axis.id())).dynamics();
-            axisResults.add(axisResult(axis, dynamics, contourResults));
+            axisResults.add(axisResult(axis, dynamics.get(axis.id()), contourResults));
         }
         List<String> notes = new ArrayList<>();
         notes.add("contours are simulated with the linear closed loop of each axis (friction, saturation and"
@@ -321,6 +334,17 @@ public final class MachineAnalyzer {
     }
 
     // ------------------------------------------------------------------------------------------------ axes
+
+    /** The axis's dynamics from the memo; the pool's copy of the request (non-null {@code done}) reports progress. */
+    private static AxisDynamics dynamics(MappedAxis axis, AnalysisMemo memo, CancellationFlag cancel,
+            ProgressListener progress, AtomicInteger done, int total) {
+        cancel.throwIfCancelled("axis " + axis.name());
+        AxisDynamics dynamics = memo.dynamics(axis.model());
+        if (done != null) {
+            progress.progress("axis " + axis.name(), done.incrementAndGet(), total);
+        }
+        return dynamics;
+    }
 
     private static AxisResult axisResult(MappedAxis axis, AxisDynamics dynamics, List<ContourResult> contours) {
         double vmax = axis.limits().velocity();
