@@ -118,14 +118,9 @@ public final class NyquistChart {
             int at = nearest(loop.omegaRadPerSec(), peakFrequencyRadPerSec);
             double x = curve.getX(at).doubleValue();
             double y = curve.getY(at).doubleValue();
-            XYPointerAnnotation closest = new XYPointerAnnotation("Ms " + Units.format3(sensitivityPeak) + " at "
+            XYPointerAnnotation closest = Notes.pointer("Ms " + Units.format3(sensitivityPeak) + " at "
                     + Units.format3(Units.hertz(peakFrequencyRadPerSec)) + " Hz", x, y,
-                    Math.atan2(-y, x + 1)); // label on the side away from −1 (Java2D angles: y grows downwards)
-            closest.setFont(ChartStyle.NOTE_FONT);
-            closest.setPaint(ChartStyle.INK);
-            closest.setArrowPaint(ChartStyle.NOTE);
-            closest.setBackgroundPaint(ChartStyle.LABEL_BACKGROUND);
-            closest.setBaseRadius(34);
+                    Math.atan2(-y, x + 1), 34, ChartStyle.NOTE); // label on the side away from −1
             closest.setTipRadius(3);
             plot.addAnnotation(closest);
         }

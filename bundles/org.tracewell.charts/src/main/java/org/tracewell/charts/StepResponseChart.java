@@ -53,15 +53,10 @@ public final class StepResponseChart {
         }
         if (Double.isFinite(figures.peakTimeSeconds()) && figures.overshootPercent() > 0) {
             double shown = figures.peakTimeSeconds() * timeScale.factorFromSi();
-            XYPointerAnnotation peak = new XYPointerAnnotation(String.format(Locale.ROOT, "overshoot %s %% at %s %s",
+            XYPointerAnnotation peak = Notes.pointer(String.format(Locale.ROOT, "overshoot %s %% at %s %s",
                     Units.format3(figures.overshootPercent()), Units.format3(shown), timeScale.unit()), shown,
-                    figures.peakValue(), Math.PI / 4); // down and right: clear of the top edge
-            peak.setFont(ChartStyle.NOTE_FONT);
-            peak.setPaint(ChartStyle.INK);
-            peak.setArrowPaint(ChartStyle.NOTE);
-            peak.setBackgroundPaint(ChartStyle.LABEL_BACKGROUND);
+                    figures.peakValue(), Math.PI / 4, 30, ChartStyle.NOTE); // down and right: clear of the top edge
             peak.setTextAnchor(TextAnchor.TOP_LEFT);
-            peak.setBaseRadius(30);
             plot.addAnnotation(peak);
         }
         return ChartStyle.apply(new JFreeChart(title, ChartStyle.TITLE_FONT, plot, false));

@@ -59,15 +59,11 @@ public final class TrackingChart {
             }
             int at = axis.indexOfPeak();
             double peakUm = axis.followingError()[at] * 1e6;
-            XYPointerAnnotation peak = new XYPointerAnnotation(axis.axisName() + " peak " + Units.format3(peakUm)
-                    + " µm", axis.timeSeconds()[at] * timeScale.factorFromSi(), peakUm,
-                    peakUm >= 0 ? Math.PI / 4 + a * Math.PI / 8 : -Math.PI / 4 - a * Math.PI / 8);
-            peak.setFont(ChartStyle.NOTE_FONT);
-            peak.setPaint(ChartStyle.INK);
-            peak.setArrowPaint(ChartStyle.seriesPaint(a));
-            peak.setBackgroundPaint(ChartStyle.LABEL_BACKGROUND);
+            XYPointerAnnotation peak = Notes.pointer(axis.axisName() + " peak " + Units.format3(peakUm) + " µm",
+                    axis.timeSeconds()[at] * timeScale.factorFromSi(), peakUm,
+                    peakUm >= 0 ? Math.PI / 4 + a * Math.PI / 8 : -Math.PI / 4 - a * Math.PI / 8, 26,
+                    ChartStyle.seriesPaint(a));
             peak.setTextAnchor(peakUm >= 0 ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
-            peak.setBaseRadius(26);
             errorPlot.addAnnotation(peak);
         }
         CombinedDomainXYPlot plot = new CombinedDomainXYPlot(new NumberAxis(timeScale.label()));

@@ -6,18 +6,13 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.image.BufferedImage;
-import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.util.List;
 
-import javax.imageio.ImageIO;
-
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYAnnotation;
-import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.IntervalMarker;
-import org.jfree.chart.plot.Marker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
@@ -30,10 +25,6 @@ import org.junit.jupiter.api.Test;
  */
 class LiveChartsTest {
 
-    private static BufferedImage render(JFreeChart chart, int w, int h) throws IOException {
-        return ImageIO.read(new ByteArrayInputStream(ChartExport.png(chart, w, h)));
-    }
-
     // ------------------------------------------------------------------------------------------------ Nyquist
 
     /** L(jω) = 10/(jω(jω + 1)(jω + 5)) as a complex product, {re, im}: independent of the magnitude/phase form. */
@@ -43,18 +34,6 @@ class LiveChartsTest {
         double im = 5 * w - w * w * w;
         double d = re * re + im * im;
         return new double[] {10 * re / d, -10 * im / d};
-    }
-
-    private static FrequencySeries ogataSeries(int n) {
-        double[] w = new double[n];
-        double[] mag = new double[n];
-        double[] phase = new double[n];
-        for (int i = 0; i < n; i++) {
-            w[i] = Math.pow(10, -2 + 4.0 * i / (n - 1));
-            mag[i] = 10 / (w[i] * Math.hypot(1, w[i]) * Math.hypot(5, w[i]));
-            phase[i] = -Math.PI / 2 - Math.atan(w[i]) - Math.atan(w[i] / 5);
-        }
-        return new FrequencySeries("L(jω)", w, mag, phase);
     }
 
     /** Ms = max 1/|1 + L(jω)| by a dense search (10⁶ points over 0.01–100 rad/s), with where it peaks. */
@@ -75,7 +54,7 @@ class LiveChartsTest {
 
     @Test
     void nyquistCurveIsLOfJOmegaWithItsMirrorAndTheMsCircleAboutMinusOne() throws IOException {
-        FrequencySeries loop = ogataSeries(2000);
+        FrequencySeries loop = ChartRenderingTest.ogataLoop(2000);
         double[] peak = densePeak();
         double ms = peak[0];
         JFreeChart chart = NyquistChart.create("Nyquist", loop, ms, peak[1]);
@@ -107,7 +86,7 @@ class LiveChartsTest {
         assertTrue(ms > 1.5, "Ms " + ms);
         assertTrue(data.getSeriesKey(NyquistChart.MS_CIRCLE).toString().contains("1/Ms = " + Units.format3(1 / ms)),
                 data.getSeriesKey(NyquistChart.MS_CIRCLE).toString());
-        assertTrue(texts(plot).contains("−1"), texts(plot));
+        assertTrue(ReviewChartsTest.texts(plot).contains("−1"), ReviewChartsTest.texts(plot));
         assertTrue(pointerTexts(plot).contains("Ms " + Units.format3(ms) + " at "), pointerTexts(plot));
 
         // The frame holds −1 with its circle, and spans are equal so circles stay round.
@@ -117,18 +96,19 @@ class LiveChartsTest {
         assertEquals(plot.getDomainAxis().getRange().getLength(), plot.getRangeAxis().getRange().getLength(), 1e-9);
         assertTrue(hi - lo < 2 * (2 * NyquistChart.FRAME_MAGNITUDE) * 1.2, "low-frequency branch does not set the frame");
 
-        BufferedImage image = render(chart, 720, 640);
+        BufferedImage image = ReviewChartsTest.render(chart, 720, 640);
         assertEquals(720, image.getWidth());
         assertEquals(640, image.getHeight());
     }
 
     @Test
     void nyquistOfAnUnstableLoopHasNoMsCircleAndSaysSo() {
-        JFreeChart chart = NyquistChart.create("Nyquist", ogataSeries(300), Double.NaN, Double.NaN);
+        JFreeChart chart = NyquistChart.create("Nyquist", ChartRenderingTest.ogataLoop(300), Double.NaN, Double.NaN);
         XYDataset data = chart.getXYPlot().getDataset();
         assertEquals(0, data.getItemCount(NyquistChart.MS_CIRCLE));
         assertTrue(data.getSeriesKey(NyquistChart.MS_CIRCLE).toString().contains("not stable"));
-        assertThrows(IllegalArgumentException.class, () -> NyquistChart.create("n", ogataSeries(10), -2, 1));
+        FrequencySeries loop = ChartRenderingTest.ogataLoop(10);
+        assertThrows(IllegalArgumentException.class, () -> NyquistChart.create("n", loop, -2, 1));
     }
 
     // ------------------------------------------------------------------------------------------------ step and ramp
@@ -140,19 +120,31 @@ class LiveChartsTest {
         return 1 - Math.exp(-sigma * t) * (Math.cos(wd * t) + sigma / wd * Math.sin(wd * t));
     }
 
+    private static double[] step(double[] t, double zeta, double wn) {
+        double[] y = new double[t.length];
+        for (int k = 0; k < t.length; k++) {
+            y[k] = step(t[k], zeta, wn);
+        }
+        return y;
+    }
+
+    /** n instants 0, dt, 2·dt, … */
+    private static double[] times(int n, double dt) {
+        double[] t = new double[n];
+        for (int k = 0; k < n; k++) {
+            t[k] = k * dt;
+        }
+        return t;
+    }
+
     @Test
     void stepChartMarksFinalValueBandPeakAndSettling() throws IOException {
         // Nise Ex. 4.5 (from memory, recomputed in DOMAIN.md §7): T = 100/(s² + 15 s + 100): ζ = 0.75, ωn = 10,
         // Tp = 0.475 s, %OS = 2.838 %.
         double zeta = 0.75;
         double wn = 10;
-        int n = 3001;
-        double[] t = new double[n];
-        double[] y = new double[n];
-        for (int k = 0; k < n; k++) {
-            t[k] = k * 1e-3;
-            y[k] = step(t[k], zeta, wn);
-        }
+        double[] t = times(3001, 1e-3);
+        double[] y = step(t, zeta, wn);
         double tp = Math.PI / (wn * Math.sqrt(1 - zeta * zeta));
         double os = 100 * Math.exp(-zeta * Math.PI / Math.sqrt(1 - zeta * zeta));
         assertEquals(0.475, tp, 5e-4);
@@ -163,14 +155,14 @@ class LiveChartsTest {
         XYPlot plot = chart.getXYPlot();
         assertEquals(475.0, plot.getDataset().getXValue(0, 475), 1e-9, "time in ms");
         assertEquals(step(0.475, zeta, wn), plot.getDataset().getYValue(0, 475), 1e-12);
-        String marks = markerLabels(plot);
+        String marks = ChartRenderingTest.labels(plot);
         assertTrue(marks.contains("final value 1.00, band ±2.00 %"), marks);
         assertTrue(marks.contains("settled at 533 ms"), marks);
         assertTrue(pointerTexts(plot).contains("overshoot 2.84 % at 475 ms"), pointerTexts(plot));
         IntervalMarker band = (IntervalMarker) plot.getRangeMarkers(Layer.BACKGROUND).iterator().next();
         assertEquals(0.98, band.getStartValue(), 1e-12);
         assertEquals(1.02, band.getEndValue(), 1e-12);
-        BufferedImage image = render(chart, 640, 400);
+        BufferedImage image = ReviewChartsTest.render(chart, 640, 400);
         assertEquals(640, image.getWidth());
         assertEquals(400, image.getHeight());
     }
@@ -184,12 +176,8 @@ class LiveChartsTest {
         double wn = Math.sqrt(kv / 0.01);
         double zeta = 1 / (2 * Math.sqrt(kv * 0.01));
         int n = 4001;
-        double[] t = new double[n];
-        double[] y = new double[n];
-        for (int k = 0; k < n; k++) {
-            t[k] = k * 1e-4;
-            y[k] = step(t[k], zeta, wn);
-        }
+        double[] t = times(n, 1e-4);
+        double[] y = step(t, zeta, wn);
         double velocity = 1.0 / 60; // 1 m/min
         RampResponse ramp = RampResponse.fromStep("y(t)", t, y, velocity, 1 / kv);
         // e(t) = ∫₀ᵗ (1 − y_step) in closed form: I_c + (σ/ω_d)·I_s with I_c = ∫e^{−στ}cos ω_dτ, I_s = ∫e^{−στ}sin ω_dτ.
@@ -215,10 +203,10 @@ class LiveChartsTest {
         assertEquals(velocity * t[1000] * 1e3, positions.getDataset().getYValue(0, 1000), 1e-12, "reference in mm");
         assertEquals(ramp.response()[1000] * 1e3, positions.getDataset().getYValue(1, 1000), 1e-12);
         assertEquals(ramp.error()[1000] * 1e6, error.getDataset().getYValue(0, 1000), 1e-9, "error in µm");
-        String marks = markerLabels(error);
+        String marks = ChartRenderingTest.labels(error);
         assertTrue(marks.contains("steady error v/Kv = 333 µm (1/Kv = 20.0 ms)"), marks);
         assertTrue(chart.getTitle().getText().contains("ramp at 1.00 m/min"), chart.getTitle().getText());
-        BufferedImage image = render(chart, 800, 520);
+        BufferedImage image = ReviewChartsTest.render(chart, 800, 520);
         assertEquals(800, image.getWidth());
         assertEquals(520, image.getHeight());
     }
@@ -231,7 +219,7 @@ class LiveChartsTest {
         assertEquals(0.75, ramp.response()[2], 1e-15, "trapezoid: ½(0 + 0.5)·1 + ½(0.5 + 0.5)·1");
         JFreeChart chart = RampResponseChart.create("Ramp", ramp, DisplayScale.SECONDS);
         XYPlot error = ((CombinedDomainXYPlot) chart.getPlot()).getSubplots().get(RampResponseChart.ERROR);
-        assertTrue(markerLabels(error).isEmpty(), markerLabels(error));
+        assertTrue(ChartRenderingTest.labels(error).isEmpty(), ChartRenderingTest.labels(error));
         assertTrue(chart.getTitle().getText().contains("without bound"), chart.getTitle().getText());
         assertThrows(IllegalArgumentException.class, () -> RampResponse.fromStep("y", t, y, 0, 1));
     }
@@ -275,40 +263,13 @@ class LiveChartsTest {
         assertTrue(errors.getItemCount(0) < n, "decimated for display: " + errors.getItemCount(0));
         assertEquals(13_210, x.indexOfPeak());
         assertTrue(pointerTexts(plot.getSubplots().get(TrackingChart.FOLLOWING_ERROR)).contains("X1 peak 42.0 µm"));
-        BufferedImage image = render(chart, 900, 600);
+        BufferedImage image = ReviewChartsTest.render(chart, 900, 600);
         assertEquals(900, image.getWidth());
         assertEquals(600, image.getHeight());
         assertThrows(IllegalArgumentException.class, () -> TrackingChart.create("t", List.of(), DisplayScale.SECONDS));
     }
 
     // ------------------------------------------------------------------------------------------------ helpers
-
-    static String markerLabels(XYPlot plot) {
-        StringBuilder all = new StringBuilder();
-        for (Layer layer : new Layer[] {Layer.FOREGROUND, Layer.BACKGROUND}) {
-            for (var markers : new java.util.Collection<?>[] {plot.getDomainMarkers(layer), plot.getRangeMarkers(layer)}) {
-                if (markers != null) {
-                    for (Object m : markers) {
-                        String label = ((Marker) m).getLabel();
-                        if (label != null) {
-                            all.append(label).append(" | ");
-                        }
-                    }
-                }
-            }
-        }
-        return all.toString();
-    }
-
-    static String texts(XYPlot plot) {
-        StringBuilder all = new StringBuilder();
-        for (XYAnnotation a : plot.getAnnotations()) {
-            if (a instanceof XYTextAnnotation t) {
-                all.append(t.getText()).append(" | ");
-            }
-        }
-        return all.toString();
-    }
 
     /** Texts of pointer annotations (they extend text annotations) only. */
     static String pointerTexts(XYPlot plot) {
@@ -323,7 +284,7 @@ class LiveChartsTest {
 
     @Test
     void nyquistSubtitleStatesTheFrame() {
-        JFreeChart chart = NyquistChart.create("Nyquist", ogataSeries(100), 2, 1);
+        JFreeChart chart = NyquistChart.create("Nyquist", ChartRenderingTest.ogataLoop(100), 2, 1);
         boolean found = false;
         for (int i = 0; i < chart.getSubtitleCount(); i++) {
             found |= chart.getSubtitle(i) instanceof TextTitle t && t.getText().contains("|L| ≤ 3");
