@@ -47,6 +47,8 @@ class EditRedrawLatencyTest {
     static final double TARGET_MS = 150;
 
     private MachineEditor editor;
+    /** Per contour view and edit: review, wait for a job, chart, on screen (ms). */
+    private final Map<String, List<double[]>> stages = new LinkedHashMap<>();
 
     @AfterEach
     void closeEditor() {
@@ -101,6 +103,15 @@ class EditRedrawLatencyTest {
         }
         out.append(String.format(Locale.ROOT, "%-34s analysis median %s ms, charts median %s ms%n",
                 "Loop Analysis job:", fmt(median(analysisMs)), fmt(median(chartsMs))));
+        for (Map.Entry<String, List<double[]>> e : stages.entrySet()) {
+            String[] parts = new String[4];
+            for (int k = 0; k < 4; k++) {
+                int stage = k;
+                parts[k] = fmt(median(e.getValue().stream().map(v -> v[stage]).toList()));
+            }
+            out.append(String.format(Locale.ROOT, "%-34s review %s ms, job wait %s ms, chart %s ms, on screen %s ms"
+                    + " (medians)%n", e.getKey() + " stages:", parts[0], parts[1], parts[2], parts[3]));
+        }
         for (Map.Entry<String, List<Double>> e : figures.entrySet()) {
             out.append("all ").append(e.getKey()).append(" (ms): ")
                     .append(String.join(" ", e.getValue().stream().map(EditRedrawLatencyTest::fmt).toList()))
@@ -138,6 +149,11 @@ class EditRedrawLatencyTest {
                     double ms = (w.view().lastRedrawNanos() - edited) / 1e6;
                     figures.computeIfAbsent(w.name(), k -> new ArrayList<>()).add(ms);
                     all = Math.max(all, ms);
+                    // Where the time went: the review (edit → new results reach the view), the wait for a job
+                    // thread, the chart built and drawn into pixels, and the UI thread putting it on screen.
+                    long[] t = w.view().lastRedrawTimings();
+                    stages.computeIfAbsent(w.name(), k -> new ArrayList<>()).add(new double[] {(t[0] - edited) / 1e6,
+                        (t[1] - t[0]) / 1e6, (t[2] - t[1]) / 1e6, (t[3] - t[2]) / 1e6});
                 }
                 figures.computeIfAbsent("every visible view", k -> new ArrayList<>()).add(all);
                 long[] job = loop.lastJobNanos();

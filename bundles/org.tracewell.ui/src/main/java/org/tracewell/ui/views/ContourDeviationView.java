@@ -31,21 +31,6 @@ public final class ContourDeviationView extends ContourView {
     private Combo magnification;
 
     @Override
-    boolean accepts(ContourResult contour) {
-        return true;
-    }
-
-    @Override
-    String noContourMessage(String machineName) {
-        return machineName + " has no contour: add one on the Machine Editor's Contours page.";
-    }
-
-    @Override
-    boolean choosesRun() {
-        return true;
-    }
-
-    @Override
     void createOptions(Composite row) {
         new Label(row, SWT.NONE).setText("Magnification:");
         magnification = new Combo(row, SWT.READ_ONLY | SWT.DROP_DOWN);

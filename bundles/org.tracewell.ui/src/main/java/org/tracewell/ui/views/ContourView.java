@@ -46,8 +46,8 @@ public abstract class ContourView extends ViewPart {
     record Drawing(JFreeChart chart, String summary) {
     }
 
-    /** A drawing with its pixels, as the job hands it to the UI thread. */
-    private record Drawn(Drawing drawing, ChartCanvas.Drawn pixels) {
+    /** A drawing with its pixels, as the job hands it to the UI thread, and when the job started and finished. */
+    private record Drawn(Drawing drawing, ChartCanvas.Drawn pixels, long startedNanos, long finishedNanos) {
     }
 
     /** What is on screen, and what it was drawn from (to skip drawing the same again). */
@@ -73,6 +73,7 @@ public abstract class ContourView extends ViewPart {
     private boolean stale;
     private volatile Shown shown;
     private volatile long lastRedrawNanos;
+    private volatile long[] lastTimings = new long[4];
     private final ListenerList<Runnable> redrawListeners = new ListenerList<>();
     private final List<String> runLabels = new ArrayList<>();
     private final Consumer<ActiveMachineReview.Outcome> reviewListener = outcome -> {
@@ -91,14 +92,20 @@ public abstract class ContourView extends ViewPart {
 
     // ------------------------------------------------------------------------------------------------ what views add
 
-    /** True for the contours this view can show (e.g. full circles only). */
-    abstract boolean accepts(ContourResult contour);
+    /** True for the contours this view can show; every contour unless a view narrows it (full circles only). */
+    boolean accepts(ContourResult contour) {
+        return true;
+    }
 
     /** Why nothing is shown when the machine has no contour this view accepts. */
-    abstract String noContourMessage(String machineName);
+    String noContourMessage(String machineName) {
+        return machineName + " has no contour: add one on the Machine Editor's Contours page.";
+    }
 
     /** True when the view shows one run at a time and offers the choice (CW / CCW of a circle test). */
-    abstract boolean choosesRun();
+    boolean choosesRun() {
+        return true;
+    }
 
     /** Adds view-specific controls to the heading row (they call {@link #redraw} when changed). */
     void createOptions(Composite row) {
@@ -225,9 +232,11 @@ public abstract class ContourView extends ViewPart {
             return;
         }
         Point size = canvas.drawingSize();
+        long requested = System.nanoTime();
         work.run(delayMs, getPartName() + ": " + contour.contourName(), () -> {
+            long started = System.nanoTime();
             Drawing drawing = draw(contour, runIndex, options);
-            return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size));
+            return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size), started, System.nanoTime());
         }, result -> {
             Drawing drawing = result.drawing();
             shown = new Shown(contour, runIndex, options, drawing);
@@ -237,6 +246,7 @@ public abstract class ContourView extends ViewPart {
             canvas.show(result.pixels());
             canvas.update(); // paint now, so the time stamp is the finished redraw's
             lastRedrawNanos = System.nanoTime();
+            lastTimings = new long[] {requested, result.startedNanos(), result.finishedNanos(), lastRedrawNanos};
             for (Runnable listener : redrawListeners) {
                 listener.run();
             }
@@ -326,6 +336,14 @@ public abstract class ContourView extends ViewPart {
     /** {@link System#nanoTime()} when the last chart finished drawing; 0 before the first. */
     public long lastRedrawNanos() {
         return lastRedrawNanos;
+    }
+
+    /**
+     * {@link System#nanoTime()} stamps of the last redraw: asked for (a review arrived or the selection changed), its
+     * job started, the chart drawn into pixels, on screen.
+     */
+    public long[] lastRedrawTimings() {
+        return lastTimings.clone();
     }
 
     /** Called on the UI thread each time a chart has been drawn. */

@@ -244,7 +244,7 @@ public final class LoopAnalysisView extends ViewPart {
             // The position loop as AxisModel.analyze() forms it (dead time as Padé of the model's order). The whole
             // axis analysis is asked for, not the position loop alone: the machine review needs it too, and through
             // the memo whichever asks first computes it and the other waits for it instead of repeating it.
-            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.axis(engineModel).dynamics().positionLoop());
+            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.dynamics(engineModel).positionLoop());
         });
     }
 

@@ -20,21 +20,6 @@ public final class TrackingView extends ContourView {
     public static final String ID = "org.tracewell.ui.view.tracking";
 
     @Override
-    boolean accepts(ContourResult contour) {
-        return true;
-    }
-
-    @Override
-    String noContourMessage(String machineName) {
-        return machineName + " has no contour to track: add one on the Machine Editor's Contours page.";
-    }
-
-    @Override
-    boolean choosesRun() {
-        return true;
-    }
-
-    @Override
     String contourForAxis(String axisId, MachineAnalysis analysis, String currentContourId) {
         if (currentContourId != null
                 && analysis.contour(currentContourId).filter(c -> takesPart(c, axisId)).isPresent()) {
