@@ -61,15 +61,14 @@ public final class TrackingChart {
             double peakUm = axis.followingError()[at] * 1e6;
             XYPointerAnnotation peak = Notes.pointer(axis.axisName() + " peak " + Units.format3(peakUm) + " µm",
                     axis.timeSeconds()[at] * timeScale.factorFromSi(), peakUm,
-                    peakUm >= 0 ? Math.PI / 4 + a * Math.PI / 8 : -Math.PI / 4 - a * Math.PI / 8, 26,
-                    ChartStyle.seriesPaint(a));
+                    peakUm >= 0 ? Math.PI / 4 : -Math.PI / 4, 26 + 30 * a, ChartStyle.seriesPaint(a)); // stacked
             peak.setTextAnchor(peakUm >= 0 ? TextAnchor.TOP_LEFT : TextAnchor.BOTTOM_LEFT);
             errorPlot.addAnnotation(peak);
         }
         CombinedDomainXYPlot plot = new CombinedDomainXYPlot(new NumberAxis(timeScale.label()));
         plot.setGap(8);
-        plot.add(positionPlot, 1);
-        plot.add(errorPlot, 1);
+        plot.add(positionPlot, 2);
+        plot.add(errorPlot, 3); // the error is what the view is for
         return ChartStyle.apply(new JFreeChart(title, ChartStyle.TITLE_FONT, plot, true));
     }
 }
