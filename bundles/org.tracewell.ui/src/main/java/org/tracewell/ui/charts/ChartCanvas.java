@@ -29,6 +29,7 @@ public final class ChartCanvas extends Canvas {
         public static final Drawn NONE = new Drawn(null, null, null);
     }
 
+    private boolean square;
     private JFreeChart chart;
     private ImageData ahead;
     private Point aheadSize;
@@ -54,11 +55,29 @@ public final class ChartCanvas extends Canvas {
         return new Drawn(chart, toImageData(rendered), size);
     }
 
-    /** The size to draw ahead at: the control's size while it is visible, else null. Call on the UI thread. */
+    /**
+     * Draws charts square, centred (for plane plots with equal data spans on both axes: a circle stays round). Call
+     * on the UI thread before charts are shown.
+     */
+    public void setSquare(boolean square) {
+        checkWidget();
+        this.square = square;
+        disposeImage();
+        redraw();
+    }
+
+    /** The size to draw ahead at: the chart's size in the control while it is visible, else null. UI thread. */
     public Point drawingSize() {
         checkWidget();
-        Point size = getSize();
+        Point size = chartSize();
         return isVisible() && size.x >= 2 && size.y >= 2 ? size : null;
+    }
+
+    /** The control's size, or the largest centred square in it. */
+    private Point chartSize() {
+        Point size = getSize();
+        int edge = Math.min(size.x, size.y);
+        return square ? new Point(edge, edge) : size;
     }
 
     /** Shows {@code newChart}; {@code null} clears the canvas. Call on the UI thread. */
@@ -82,10 +101,13 @@ public final class ChartCanvas extends Canvas {
     }
 
     private void paint(GC gc) {
-        Point size = getSize();
-        if (chart == null || size.x < 2 || size.y < 2) {
+        Point whole = getSize();
+        Point size = chartSize();
+        if (chart == null || size.x < 2 || size.y < 2 || !size.equals(whole)) {
             gc.setBackground(getDisplay().getSystemColor(SWT.COLOR_WHITE));
-            gc.fillRectangle(0, 0, size.x, size.y);
+            gc.fillRectangle(0, 0, whole.x, whole.y);
+        }
+        if (chart == null || size.x < 2 || size.y < 2) {
             return;
         }
         if (image == null || !imageSize.equals(size)) {
@@ -94,7 +116,7 @@ public final class ChartCanvas extends Canvas {
             image = new Image(getDisplay(), pixels);
             imageSize = size;
         }
-        gc.drawImage(image, 0, 0);
+        gc.drawImage(image, (whole.x - size.x) / 2, (whole.y - size.y) / 2);
     }
 
     private void disposeImage() {

@@ -39,6 +39,11 @@ public final class CircleTestView extends ContourView {
     }
 
     @Override
+    boolean planePlot() {
+        return true;
+    }
+
+    @Override
     Drawing draw(ContourResult contour, int runIndex, Object options) {
         List<CircleRun> runs = new ArrayList<>();
         StringBuilder figures = new StringBuilder();

@@ -65,6 +65,11 @@ public final class ContourDeviationView extends ContourView {
     }
 
     @Override
+    boolean planePlot() {
+        return true;
+    }
+
+    @Override
     Drawing draw(ContourResult contour, int runIndex, Object options) {
         ContourRun run = contour.runs().get(runIndex);
         ContourDeviation data = ContourChartData.deviation(contour.contourName(), run.contourError(), DISPLAY_POINTS);

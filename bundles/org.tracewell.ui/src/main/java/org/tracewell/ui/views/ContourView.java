@@ -107,6 +107,11 @@ public abstract class ContourView extends ViewPart {
         return true;
     }
 
+    /** True for a plot of the contour plane, drawn square so that equal data spans look equal (circles round). */
+    boolean planePlot() {
+        return false;
+    }
+
     /** Adds view-specific controls to the heading row (they call {@link #redraw} when changed). */
     void createOptions(Composite row) {
     }
@@ -150,6 +155,7 @@ public abstract class ContourView extends ViewPart {
         summary.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         canvas = new ChartCanvas(parent, SWT.NONE);
         canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        canvas.setSquare(planePlot());
         work = new NewestOnly(canvas);
 
         getSite().getPage().addPartListener(visibility);
