@@ -11,6 +11,11 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.PlatformUI;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.ui.Layer;
 import org.junit.jupiter.api.Test;
 import org.tracewell.engine.loop.LoopAnalysis;
 import org.tracewell.ui.views.LoopAnalysisView;
@@ -36,6 +41,18 @@ class LoopAnalysisViewTest {
         // 100 1/s = 6.00 (m/min)/mm (1 (m/min)/mm = 16.667 1/s, common practice)
         assertTrue(value(rows, "Kv").contains("6.00 (m/min)/mm"), value(rows, "Kv"));
         assertEquals("stable", value(rows, "Closed loop"));
+
+        // The charts of the same loop: Nyquist with the Ms circle, and the ramp settling at v/Kv.
+        JFreeChart nyquist = view.shownChart("Nyquist");
+        String msCircle = nyquist.getXYPlot().getDataset().getSeriesKey(2).toString();
+        assertTrue(msCircle.startsWith("Ms circle: radius 1/Ms = "), msCircle);
+        JFreeChart ramp = view.shownChart("Ramp response");
+        assertTrue(ramp.getTitle().getText().contains("ramp at 1.00 m/min"), ramp.getTitle().getText());
+        XYPlot error = ((CombinedDomainXYPlot) ramp.getPlot()).getSubplots().get(1);
+        String steady = ((ValueMarker) error.getRangeMarkers(Layer.FOREGROUND).iterator().next()).getLabel();
+        // Kv = 100 1/s: 1/Kv = 10 ms, and at 1 m/min (16.67 mm/s) the error settles at 16.67/100 mm = 167 µm.
+        assertEquals("steady error v/Kv = 167 µm (1/Kv = 10.0 ms)", steady);
+        assertTrue(view.shownChart("Step response").getTitle().getText().startsWith("Unit-step response"));
     }
 
     @Test

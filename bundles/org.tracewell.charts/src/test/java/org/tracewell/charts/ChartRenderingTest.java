@@ -24,9 +24,8 @@ import org.junit.jupiter.api.Test;
 /** Charts render headless at the requested size and carry the data and markers they were given. */
 class ChartRenderingTest {
 
-    /** L(jω) = 10 / (jω (jω+1)(jω+5)), evaluated directly (independent of the engine). */
-    private static FrequencySeries ogataLoop() {
-        int n = 400;
+    /** L(jω) = 10 / (jω (jω+1)(jω+5)) at n frequencies over 0.01–100 rad/s, evaluated directly (not by the engine). */
+    static FrequencySeries ogataLoop(int n) {
         double[] w = new double[n];
         double[] mag = new double[n];
         double[] phase = new double[n];
@@ -43,7 +42,7 @@ class ChartRenderingTest {
         // Margins of K/(s(s+1)(s+5)), K = 10: phase crossover √5 rad/s, GM = 3 (9.54 dB)
         // (Ogata, Modern Control Engineering, ch. 7 — from memory; recomputed in DOMAIN.md §7).
         Margins margins = new Margins(1.2271, Math.toRadians(25.39), Math.sqrt(5), 3.0);
-        JFreeChart chart = BodeChart.create("Position loop", List.of(ogataLoop()), margins);
+        JFreeChart chart = BodeChart.create("Position loop", List.of(ogataLoop(400)), margins);
         byte[] png = ChartExport.png(chart, 800, 500);
         BufferedImage image = ImageIO.read(new ByteArrayInputStream(png));
         assertEquals(800, image.getWidth());
@@ -53,7 +52,7 @@ class ChartRenderingTest {
 
     @Test
     void logFrequencyAxisLabelsEveryDecadeAsPlainNumbers() {
-        JFreeChart chart = BodeChart.create("Position loop", List.of(ogataLoop()), Margins.NONE);
+        JFreeChart chart = BodeChart.create("Position loop", List.of(ogataLoop(400)), Margins.NONE);
         ChartExport.png(chart, 800, 500); // lays the axis out
         CombinedDomainXYPlot plot = (CombinedDomainXYPlot) chart.getPlot();
         java.awt.image.BufferedImage scratch = new BufferedImage(800, 500, BufferedImage.TYPE_INT_RGB);
@@ -67,7 +66,7 @@ class ChartRenderingTest {
 
     @Test
     void bodeDatasetIsInHertzAndDecibels() {
-        FrequencySeries loop = ogataLoop();
+        FrequencySeries loop = ogataLoop(400);
         JFreeChart chart = BodeChart.create("t", List.of(loop), Margins.NONE);
         CombinedDomainXYPlot plot = (CombinedDomainXYPlot) chart.getPlot();
         XYDataset magnitude = plot.getSubplots().get(0).getDataset();
@@ -81,7 +80,7 @@ class ChartRenderingTest {
     @Test
     void marginsAreAnnotatedInTradeUnits() {
         Margins margins = new Margins(1.2271, Math.toRadians(25.39), Math.sqrt(5), 3.0);
-        JFreeChart chart = BodeChart.create("t", List.of(ogataLoop()), margins);
+        JFreeChart chart = BodeChart.create("t", List.of(ogataLoop(400)), margins);
         CombinedDomainXYPlot plot = (CombinedDomainXYPlot) chart.getPlot();
         XYPlot magnitude = plot.getSubplots().get(0);
         XYPlot phase = plot.getSubplots().get(1);
@@ -121,7 +120,8 @@ class ChartRenderingTest {
         assertTrue(e.getMessage().contains("1…8000"), e.getMessage());
     }
 
-    private static String labels(XYPlot plot) {
+    /** Labels of the value markers of the plot, " | "-separated. */
+    static String labels(XYPlot plot) {
         StringBuilder all = new StringBuilder();
         for (Layer layer : new Layer[] {Layer.FOREGROUND, Layer.BACKGROUND}) {
             for (var markers : new java.util.Collection<?>[] {plot.getDomainMarkers(layer), plot.getRangeMarkers(layer)}) {

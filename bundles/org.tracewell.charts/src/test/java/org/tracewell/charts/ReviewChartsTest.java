@@ -26,7 +26,7 @@ import org.junit.jupiter.api.Test;
 /** The design-review charts: contour deviation, circle-test polar plot, budget bars. Expected values by construction. */
 class ReviewChartsTest {
 
-    private static BufferedImage render(JFreeChart chart, int w, int h) throws IOException {
+    static BufferedImage render(JFreeChart chart, int w, int h) throws IOException {
         return ImageIO.read(new ByteArrayInputStream(ChartExport.png(chart, w, h)));
     }
 

@@ -1,5 +1,6 @@
 package org.tracewell.requirements;
 
+import org.tracewell.core.analysis.AnalysisMemo;
 import org.tracewell.core.analysis.CancellationFlag;
 import org.tracewell.core.analysis.MachineAnalysis;
 import org.tracewell.core.analysis.MachineAnalyzer;
@@ -21,8 +22,17 @@ public final class DesignReview {
      */
     public static ReviewResults run(Machine machine, ReviewProvenance provenance, ProgressListener progress,
             CancellationFlag cancel) throws MappingException {
+        return run(machine, provenance, progress, cancel, AnalysisMemo.none());
+    }
+
+    /**
+     * As {@link #run(Machine, ReviewProvenance, ProgressListener, CancellationFlag)}, finding the axis analyses and
+     * contour runs of unchanged inputs in {@code memo} (a workbench re-reviews after every edit).
+     */
+    public static ReviewResults run(Machine machine, ReviewProvenance provenance, ProgressListener progress,
+            CancellationFlag cancel, AnalysisMemo memo) throws MappingException {
         MachineAnalysis analysis = MachineAnalyzer.analyze(EngineMapping.map(machine), provenance.contourFilter(),
-                progress, cancel);
+                progress, cancel, memo);
         MachineBudget budget = MachineBudgets.build(machine, analysis);
         RequirementReport requirements = RequirementEvaluator.evaluate(machine, analysis, budget);
         return new ReviewResults(analysis, budget, requirements, provenance);

@@ -5,8 +5,8 @@ import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 
 /**
- * Axis Design: the machine editor in the middle, analysis views below and beside it.
- * Views that are not installed yet are kept as placeholders so they open in their slot.
+ * Axis Design: the machine editor on the left, the Loop Analysis view beside it with the contour views (Circle Test,
+ * Contour Deviation) under it, and the review views (Requirement Trace, Error Budget, Tracking) under the editor.
  */
 public final class AxisDesignPerspective implements IPerspectiveFactory {
 
@@ -27,19 +27,23 @@ public final class AxisDesignPerspective implements IPerspectiveFactory {
 
         IFolderLayout right = layout.createFolder("org.tracewell.ui.folder.right", IPageLayout.RIGHT, 0.52f, editorArea);
         right.addView(LOOP_ANALYSIS_VIEW);
-        right.addPlaceholder(CIRCLE_TEST_VIEW);
-        right.addPlaceholder(CONTOUR_DEVIATION_VIEW);
+        // The contour views below the loop: the circle test on top, so a loop and a contour chart show side by side.
+        IFolderLayout contours = layout.createFolder("org.tracewell.ui.folder.contours", IPageLayout.BOTTOM, 0.5f,
+                "org.tracewell.ui.folder.right");
+        contours.addView(CIRCLE_TEST_VIEW);
+        contours.addView(CONTOUR_DEVIATION_VIEW);
 
         IFolderLayout bottom = layout.createFolder("org.tracewell.ui.folder.bottom", IPageLayout.BOTTOM, 0.65f, editorArea);
         // Requirement Trace first so it is the tab on top; Error Budget beside it shows the same review.
         bottom.addView(REQUIREMENT_TRACE_VIEW);
         bottom.addView(ERROR_BUDGET_VIEW);
-        bottom.addPlaceholder(TRACKING_VIEW);
+        bottom.addView(TRACKING_VIEW);
         bottom.addPlaceholder(IPageLayout.ID_PROBLEM_VIEW);
         bottom.addPlaceholder(IPageLayout.ID_PROP_SHEET);
 
-        layout.addShowViewShortcut(LOOP_ANALYSIS_VIEW);
-        layout.addShowViewShortcut(REQUIREMENT_TRACE_VIEW);
-        layout.addShowViewShortcut(ERROR_BUDGET_VIEW);
+        for (String view : new String[] {LOOP_ANALYSIS_VIEW, CIRCLE_TEST_VIEW, CONTOUR_DEVIATION_VIEW, TRACKING_VIEW,
+            REQUIREMENT_TRACE_VIEW, ERROR_BUDGET_VIEW}) {
+            layout.addShowViewShortcut(view);
+        }
     }
 }

@@ -52,60 +52,81 @@ public final class MachineAnalyzer {
         return analyze(inputs, List.of(), progress, cancel);
     }
 
+    /** As {@link #analyze(MachineInputs, List, ProgressListener, CancellationFlag, AnalysisMemo)}, keeping nothing. */
+    public static MachineAnalysis analyze(MachineInputs inputs, List<String> contourNames, ProgressListener progress,
+            CancellationFlag cancel) {
+        return analyze(inputs, contourNames, progress, cancel, AnalysisMemo.none());
+    }
+
     /**
      * @param contourNames names (or ids) of the contours to analyse; empty = all
+     * @param memo         where axis analyses and contour runs of equal inputs are found instead of recomputed
      * @throws IllegalArgumentException when a named contour does not exist, or a contour's axis is missing
      * @throws AnalysisCancelledException when {@code cancel} is set while running
      */
     public static MachineAnalysis analyze(MachineInputs inputs, List<String> contourNames, ProgressListener progress,
-            CancellationFlag cancel) {
+            CancellationFlag cancel, AnalysisMemo memo) {
         List<MappedContour> contours = selectContours(inputs, contourNames);
         int total = inputs.axes().size() + contours.stream().mapToInt(c -> isFullCircle(c.path()) ? 2 : 1).sum();
         AtomicInteger done = new AtomicInteger();
 
-        Map<String, CompletableFuture<AxisWork>> axisWork = new LinkedHashMap<>();
-        for (MappedAxis axis : inputs.axes()) {
-            axisWork.put(axis.id(), async(() -> {
-                cancel.throwIfCancelled("axis " + axis.name());
-                AxisWork work = new AxisWork(axis.model().analyze(), axis.model().toAxisLoop());
-                progress.progress("axis " + axis.name(), done.incrementAndGet(), total);
-                return work;
-            }));
-        }
+        // Without a memo of the caller's, one for this analysis: a run two contours share is simulated once, and the
+        // calling thread and the pool never analyse the same axis twice.
+        AnalysisMemo work = memo.keepsNothing()
+                ? AnalysisMemo.bounded(inputs.axes().size() + 1, 2 * contours.size() + 1) : memo;
 
+        // The runs need only each axis's closed loop (cheap), not its analysed dynamics: they start at once, in the
+        // pool, while the dynamics are analysed alongside.
+        Map<String, AxisLoop> loops = new LinkedHashMap<>();
+        for (MappedAxis axis : inputs.axes()) {
+            loops.put(axis.id(), work.loop(axis.model()));
+        }
         List<ContourWork> contourWork = new ArrayList<>();
         for (MappedContour contour : contours) {
             MappedAxis first = axisOf(inputs, contour, contour.firstAxisId());
             MappedAxis second = axisOf(inputs, contour, contour.secondAxisId());
-            CompletableFuture<AxisWork> firstWork = axisWork.get(first.id());
-            CompletableFuture<AxisWork> secondWork = axisWork.get(second.id());
+            AxisLoop firstLoop = loops.get(first.id());
+            AxisLoop secondLoop = loops.get(second.id());
             Optional<CircleTestSetup> setup = circleSetup(contour);
             List<CompletableFuture<ContourRun>> runs = new ArrayList<>();
             if (setup.isPresent()) {
                 CircleTestSetup programmed = setup.get();
                 for (CircleTestSetup s : List.of(programmed, programmed.reversed())) {
-                    runs.add(firstWork.thenCombineAsync(secondWork, (a, b) -> runCircle(contour, s, first, second,
-                            a.loop(), b.loop(), progress, done, total, cancel)));
+                    runs.add(async(() -> runCircle(contour, s, first, second, firstLoop, secondLoop, progress, done,
+                            total, cancel, work)));
                 }
             } else {
-                runs.add(firstWork.thenCombineAsync(secondWork, (a, b) -> runProgrammed(contour, first, second,
-                        a.loop(), b.loop(), progress, done, total, cancel)));
+                runs.add(async(() -> runProgrammed(contour, first, second, firstLoop, secondLoop, progress, done,
+                        total, cancel, work)));
             }
             contourWork.add(new ContourWork(contour, first, second, setup, runs));
         }
 
+        // Axis dynamics: queued behind the runs, last axis first, while this thread works from the first axis; the
+        // memo hands each axis to whichever gets there first (on two cores: runs in the pool, dynamics here).
+        Map<String, CompletableFuture<AxisDynamics>> queued = new LinkedHashMap<>();
+        List<MappedAxis> reversed = new ArrayList<>(inputs.axes());
+        java.util.Collections.reverse(reversed);
+        for (MappedAxis axis : reversed) {
+            queued.put(axis.id(), async(() -> dynamics(axis, work, cancel, progress, done, total)));
+        }
+        Map<String, AxisDynamics> dynamics = new LinkedHashMap<>();
+        for (MappedAxis axis : inputs.axes()) {
+            dynamics.put(axis.id(), dynamics(axis, work, cancel, progress, null, total));
+        }
+        for (CompletableFuture<AxisDynamics> q : queued.values()) {
+            join(q);
+        }
+
         List<ContourResult> contourResults = new ArrayList<>();
-        for (ContourWork work : contourWork) {
-            List<ContourRun> runs = work.runs().stream().map(MachineAnalyzer::join).toList();
-            AxisDynamics a = join(axisWork.get(work.first().id())).dynamics();
-            AxisDynamics b = join(axisWork.get(work.second().id())).dynamics();
-            contourResults.add(contourResult(work, runs, a, b));
+        for (ContourWork w : contourWork) {
+            List<ContourRun> runs = w.runs().stream().map(MachineAnalyzer::join).toList();
+            contourResults.add(contourResult(w, runs, dynamics.get(w.first().id()), dynamics.get(w.second().id())));
         }
 
         List<AxisResult> axisResults = new ArrayList<>();
         for (MappedAxis axis : inputs.axes()) {
-            AxisDynamics dynamics = join(axisWork.get(axis.id())).dynamics();
-            axisResults.add(axisResult(axis, dynamics, contourResults));
+            axisResults.add(axisResult(axis, dynamics.get(axis.id()), contourResults));
         }
         List<String> notes = new ArrayList<>();
         notes.add("contours are simulated with the linear closed loop of each axis (friction, saturation and"
@@ -168,28 +189,35 @@ public final class MachineAnalyzer {
 
     private static ContourRun runCircle(MappedContour contour, CircleTestSetup setup, MappedAxis first,
             MappedAxis second, AxisLoop firstLoop, AxisLoop secondLoop, ProgressListener progress, AtomicInteger done,
-            int total, CancellationFlag cancel) {
+            int total, CancellationFlag cancel, AnalysisMemo memo) {
         RunDirection direction = setup.direction() == ArcDirection.CW ? RunDirection.CW : RunDirection.CCW;
         cancel.throwIfCancelled("contour '" + contour.name() + "' " + direction.label());
-        Path path = setup.path();
-        TrackingResult tracking = track(contour, path, first, second, firstLoop, secondLoop);
-        ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, path, ContourErrorAnalysis.DEFAULT_WINDOW);
-        CircleTestResult circle = CircleTest.evaluate(setup, tracking);
+        ContourRun run = memo.run(AnalysisMemo.RunKey.circle(contour, setup, first, second), () -> {
+            Path path = setup.path();
+            TrackingResult tracking = track(contour, path, first, second, firstLoop, secondLoop);
+            ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, path,
+                    ContourErrorAnalysis.DEFAULT_WINDOW);
+            CircleTestResult circle = CircleTest.evaluate(setup, tracking);
+            return new ContourRun(direction, path, tracking, error, Optional.of(setup), Optional.of(circle),
+                    metrics(tracking, error, Optional.of(circle)));
+        });
         progress.progress("contour '" + contour.name() + "' " + direction.label(), done.incrementAndGet(), total);
-        return new ContourRun(direction, path, tracking, error, Optional.of(setup), Optional.of(circle),
-                metrics(tracking, error, Optional.of(circle)));
+        return run;
     }
 
     private static ContourRun runProgrammed(MappedContour contour, MappedAxis first, MappedAxis second,
             AxisLoop firstLoop, AxisLoop secondLoop, ProgressListener progress, AtomicInteger done, int total,
-            CancellationFlag cancel) {
+            CancellationFlag cancel, AnalysisMemo memo) {
         cancel.throwIfCancelled("contour '" + contour.name() + "'");
-        TrackingResult tracking = track(contour, contour.path(), first, second, firstLoop, secondLoop);
-        ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, contour.path(),
-                ContourErrorAnalysis.DEFAULT_WINDOW);
+        ContourRun run = memo.run(AnalysisMemo.RunKey.programmed(contour, first, second), () -> {
+            TrackingResult tracking = track(contour, contour.path(), first, second, firstLoop, secondLoop);
+            ContourErrorResult error = ContourErrorAnalysis.analyse(tracking, contour.path(),
+                    ContourErrorAnalysis.DEFAULT_WINDOW);
+            return new ContourRun(RunDirection.PROGRAMMED, contour.path(), tracking, error, Optional.empty(),
+                    Optional.empty(), metrics(tracking, error, Optional.empty()));
+        });
         progress.progress("contour '" + contour.name() + "'", done.incrementAndGet(), total);
-        return new ContourRun(RunDirection.PROGRAMMED, contour.path(), tracking, error, Optional.empty(),
-                Optional.empty(), metrics(tracking, error, Optional.empty()));
+        return run;
     }
 
     private static TrackingResult track(MappedContour contour, Path path, MappedAxis first, MappedAxis second,
@@ -307,6 +335,17 @@ public final class MachineAnalyzer {
 
     // ------------------------------------------------------------------------------------------------ axes
 
+    /** The axis's dynamics from the memo; the pool's copy of the request (non-null {@code done}) reports progress. */
+    private static AxisDynamics dynamics(MappedAxis axis, AnalysisMemo memo, CancellationFlag cancel,
+            ProgressListener progress, AtomicInteger done, int total) {
+        cancel.throwIfCancelled("axis " + axis.name());
+        AxisDynamics dynamics = memo.dynamics(axis.model());
+        if (done != null) {
+            progress.progress("axis " + axis.name(), done.incrementAndGet(), total);
+        }
+        return dynamics;
+    }
+
     private static AxisResult axisResult(MappedAxis axis, AxisDynamics dynamics, List<ContourResult> contours) {
         double vmax = axis.limits().velocity();
         FeedFollowingError atMax = new FeedFollowingError("", "max velocity", vmax, dynamics.followingError(vmax),
@@ -349,9 +388,6 @@ public final class MachineAnalyzer {
             }
             throw failed;
         }
-    }
-
-    private record AxisWork(AxisDynamics dynamics, AxisLoop loop) {
     }
 
     private record ContourWork(MappedContour contour, MappedAxis first, MappedAxis second,

@@ -2,14 +2,10 @@ package org.tracewell.ui.views;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 
-import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.ListenerList;
-import org.eclipse.core.runtime.Status;
-import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.emf.common.notify.Notification;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.util.EContentAdapter;
@@ -20,6 +16,7 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.CTabFolder;
 import org.eclipse.swt.custom.CTabItem;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.graphics.Point;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
@@ -47,11 +44,12 @@ import org.tracewell.ui.charts.ChartCanvas;
 
 /**
  * Loop Analysis: type, error constants, steady-state errors, margins, bandwidth and step
- * figures of one loop, with Bode, step and pole-zero charts. The loop is either typed as
+ * figures of one loop, with Bode, Nyquist, step, ramp and pole-zero charts. The loop is either typed as
  * transfer-function coefficients, or it is the position loop of the axis selected in the
  * Machine Editor (or any part whose selection holds a model element): the view follows the
- * selection and re-analyses when that axis changes. Analyses run off the UI thread after a
- * short pause; only the newest result is shown.
+ * selection and re-analyses when that axis changes, at once and on its own (it does not wait for the review of the
+ * whole machine; both find the axis's analysis in the shared {@link ActiveMachineReview#MEMO}). Analyses and the
+ * chart on top run off the UI thread; only the newest result is shown.
  */
 public final class LoopAnalysisView extends ViewPart {
 
@@ -64,10 +62,14 @@ public final class LoopAnalysisView extends ViewPart {
      * Pause after a model change or a selection before analysing, ms: short, because a change arrives as one command
      * (not per keystroke); it only folds bursts (an undo of several commands, arrow keys in the tree) into one run.
      */
-    static final int MODEL_DEBOUNCE_MS = 30;
+    static final int MODEL_DEBOUNCE_MS = 10;
 
     /** Title shown for the typed loop. */
     public static final String TYPED_TITLE = "Typed loop";
+
+    /** The chart tabs, in order. */
+    public static final List<String> CHART_TABS = List.of("Bode", "Nyquist", "Step response", "Ramp response",
+            "Closed-loop poles");
 
     private Text numerator;
     private Text denominator;
@@ -80,10 +82,15 @@ public final class LoopAnalysisView extends ViewPart {
     private Label message;
     private Table table;
     private ChartCanvas bode;
+    private ChartCanvas nyquist;
     private ChartCanvas step;
+    private ChartCanvas ramp;
     private ChartCanvas poles;
 
-    private final AtomicLong generation = new AtomicLong();
+    private CTabFolder chartTabs;
+    private NewestOnly work;
+    /** Tabs whose chart of the analysis on screen is not built yet (built when the tab is first shown). */
+    private final boolean[] chartPending = new boolean[CHART_TABS.size()];
     private volatile LoopAnalysis shown;
     private volatile String shownTitle;
     private volatile long lastRedrawNanos;
@@ -153,16 +160,21 @@ public final class LoopAnalysisView extends ViewPart {
             column.setWidth(title.equals("Quantity") ? 175 : 330);
         }
         CTabFolder tabs = new CTabFolder(sash, SWT.BORDER | SWT.BOTTOM);
-        bode = tab(tabs, "Bode");
-        step = tab(tabs, "Step response");
-        poles = tab(tabs, "Closed-loop poles");
+        bode = tab(tabs, CHART_TABS.get(0));
+        nyquist = tab(tabs, CHART_TABS.get(1));
+        step = tab(tabs, CHART_TABS.get(2));
+        ramp = tab(tabs, CHART_TABS.get(3));
+        poles = tab(tabs, CHART_TABS.get(4));
         tabs.setSelection(0);
+        tabs.addListener(SWT.Selection, e -> ensureChart(tabs.getSelectionIndex()));
+        chartTabs = tabs;
         sash.setWeights(52, 48);
 
         Label caution = new Label(parent, SWT.WRAP);
         caution.setText("Caution: " + SafetyCaution.SHORT);
         caution.setLayoutData(new GridData(SWT.FILL, SWT.BOTTOM, true, false));
 
+        work = new NewestOnly(table);
         for (Text t : List.of(numerator, denominator, deadTimeMs, feedbackNumerator, feedbackDenominator)) {
             t.addModifyListener(e -> schedule(DEBOUNCE_MS));
         }
@@ -214,11 +226,11 @@ public final class LoopAnalysisView extends ViewPart {
      * position loop in a job.
      */
     private void scheduleFollowed(int delayMs) {
-        long mine = generation.incrementAndGet();
+        long mine = work.next();
         Display display = table.getDisplay();
         display.timerExec(delayMs, () -> {
             Axis axis = followed;
-            if (mine != generation.get() || axis == null || table.isDisposed()) {
+            if (!work.isNewest(mine) || axis == null || table.isDisposed()) {
                 return;
             }
             String loopTitle = (axis.getName() == null ? "axis" : axis.getName()) + " · position loop";
@@ -229,67 +241,69 @@ public final class LoopAnalysisView extends ViewPart {
                 showRejected(loopTitle, e.getMessage());
                 return;
             }
-            // Only the position loop, exactly as AxisModel.analyze() forms it (dead time as Padé of the model's
-            // order); the velocity loop and tracking figures are not shown here and would double the work.
-            run(mine, loopTitle, () -> LoopAnalyzer.analyze(
-                    engineModel.positionOpenLoop().withPadeDelay(engineModel.padeOrder()), null));
+            // The position loop as AxisModel.analyze() forms it (dead time as Padé of the model's order). The whole
+            // axis analysis is asked for, not the position loop alone: the machine review needs it too, and through
+            // the memo whichever asks first computes it and the other waits for it instead of repeating it.
+            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.dynamics(engineModel).positionLoop());
         });
     }
 
     /** Shows a given analysis (charts are drawn off the UI thread), e.g. a loop another view has analysed. */
     public void showAnalysis(String loopTitle, LoopAnalysis analysis) {
-        run(generation.incrementAndGet(), loopTitle, () -> analysis);
+        run(work.next(), loopTitle, () -> analysis);
     }
 
     /** Analyses and shows the loop {@code forward} with feedback {@code feedback} under {@code loopTitle}. */
     public void showLoop(String loopTitle, TransferFunction forward, TransferFunction feedback) {
-        run(generation.incrementAndGet(), loopTitle, () -> LoopAnalyzer.analyze(forward, feedback));
+        run(work.next(), loopTitle, () -> LoopAnalyzer.analyze(forward, feedback));
     }
 
     private void run(long mine, String loopTitle, Supplier<LoopAnalysis> analysis) {
+        ChartTarget target = chartOnTop();
         submit(mine, 0, loopTitle, false, () -> {
             try {
                 long started = System.nanoTime();
                 LoopAnalysis result = analysis.get();
                 long analysed = System.nanoTime();
-                Outcome outcome = withCharts(result);
+                Outcome outcome = withCharts(result, target);
                 lastAnalysisNanos = analysed - started;
                 lastChartsNanos = System.nanoTime() - analysed;
                 return outcome;
             } catch (IllegalArgumentException | ArithmeticException e) {
-                return new Outcome(null, null, null, null, e.getMessage());
+                return Outcome.rejected(e.getMessage());
             }
         });
     }
 
-    /**
-     * The one way work reaches the screen: {@code work} runs in a job after {@code delayMs}; its outcome is shown
-     * on the UI thread only if no newer request ({@code generation}) has come in meanwhile.
-     */
-    private void submit(long mine, long delayMs, String loopTitle, boolean typed, Supplier<Outcome> work) {
-        Display display = table.getDisplay();
-        Job job = Job.create("Loop analysis: " + loopTitle, (IProgressMonitor monitor) -> {
-            if (mine != generation.get() || monitor.isCanceled()) {
-                return Status.CANCEL_STATUS;
-            }
-            Outcome outcome = work.get();
-            display.asyncExec(() -> {
-                if (mine == generation.get() && !table.isDisposed()) {
-                    title.setText(loopTitle);
-                    showTypedFields(typed);
-                    show(outcome);
-                }
-            });
-            return Status.OK_STATUS;
+    /** The one way work reaches the screen: in a job after {@code delayMs}, shown only if still the newest request. */
+    private void submit(long mine, long delayMs, String loopTitle, boolean typed, Supplier<Outcome> job) {
+        work.run(mine, delayMs, "Loop analysis: " + loopTitle, job, outcome -> {
+            title.setText(loopTitle);
+            showTypedFields(typed);
+            show(outcome);
         });
-        job.setSystem(true);
-        job.schedule(delayMs);
+    }
+
+    /** Which chart is on top and its size, read on the UI thread, so the job draws that one ahead. */
+    private ChartTarget chartOnTop() {
+        List<ChartCanvas> canvases = canvases();
+        for (int i = 0; i < canvases.size(); i++) {
+            Point size = canvases.get(i).drawingSize();
+            if (size != null) {
+                return new ChartTarget(i, size);
+            }
+        }
+        return new ChartTarget(-1, null);
+    }
+
+    private List<ChartCanvas> canvases() {
+        return List.of(bode, nyquist, step, ramp, poles);
     }
 
     private void showRejected(String loopTitle, String reason) {
         title.setText(loopTitle);
         showTypedFields(false);
-        show(new Outcome(null, null, null, null, reason));
+        show(Outcome.rejected(reason));
     }
 
     private static Text field(Composite form, String label, String initial, String tooltip) {
@@ -328,26 +342,41 @@ public final class LoopAnalysisView extends ViewPart {
         String fbNum = feedbackNumerator.getText();
         String fbDen = feedbackDenominator.getText();
         String delay = deadTimeMs.getText();
-        submit(generation.incrementAndGet(), delayMs, TYPED_TITLE, true, () -> compute(num, den, fbNum, fbDen, delay));
+        ChartTarget target = chartOnTop();
+        submit(work.next(), delayMs, TYPED_TITLE, true, () -> compute(num, den, fbNum, fbDen, delay, target));
     }
 
     /** Pure: text in, analysis and charts (or the reason for rejecting the input) out. */
-    static Outcome compute(String num, String den, String fbNum, String fbDen, String delayMsText) {
+    static Outcome compute(String num, String den, String fbNum, String fbDen, String delayMsText,
+            ChartTarget target) {
         try {
             double delayMs = parseDelay(delayMsText);
             TransferFunction forward = TransferFunction.of(CoefficientText.parse("Numerator", num),
                     CoefficientText.parse("Denominator", den), delayMs / 1000.0);
             TransferFunction feedback = TransferFunction.of(CoefficientText.parse("Feedback numerator", fbNum),
                     CoefficientText.parse("Feedback denominator", fbDen));
-            return withCharts(LoopAnalyzer.analyze(forward, feedback));
+            return withCharts(LoopAnalyzer.analyze(forward, feedback), target);
         } catch (IllegalArgumentException e) {
-            return new Outcome(null, null, null, null, e.getMessage());
+            return Outcome.rejected(e.getMessage());
         }
     }
 
-    private static Outcome withCharts(LoopAnalysis analysis) {
-        return new Outcome(analysis, LoopCharts.bode(analysis), LoopCharts.step(analysis), LoopCharts.poles(analysis),
-                null);
+    /**
+     * Builds and draws the chart on top only: the others are built when their tab is first shown, so an edit costs
+     * one chart, not five.
+     */
+    private static Outcome withCharts(LoopAnalysis analysis, ChartTarget target) {
+        ChartCanvas.Drawn onTop = target.index() < 0 ? ChartCanvas.Drawn.NONE
+                : ChartCanvas.draw(LoopCharts.forTab(analysis, target.index()), target.size());
+        return new Outcome(analysis, target.index(), onTop, null);
+    }
+
+    /** Builds the chart of tab {@code index} for the analysis on screen if it is still missing (UI thread). */
+    private void ensureChart(int index) {
+        if (index >= 0 && index < chartPending.length && chartPending[index] && shown != null) {
+            chartPending[index] = false;
+            canvases().get(index).setChart(LoopCharts.forTab(shown, index));
+        }
     }
 
     private static double parseDelay(String text) {
@@ -379,13 +408,16 @@ public final class LoopAnalysisView extends ViewPart {
         for (String[] row : LoopSummary.rows(outcome.analysis())) {
             new TableItem(table, SWT.NONE).setText(row);
         }
-        bode.setChart(outcome.bode());
-        step.setChart(outcome.step());
-        poles.setChart(outcome.poles());
+        List<ChartCanvas> canvases = canvases();
+        for (int i = 0; i < canvases.size(); i++) {
+            chartPending[i] = i != outcome.drawnIndex();
+            canvases.get(i).show(i == outcome.drawnIndex() ? outcome.drawn() : ChartCanvas.Drawn.NONE);
+        }
+        ensureChart(chartTabs.getSelectionIndex()); // the tab on top changed while the job ran
         message.getParent().layout(true);
         // Paint now, so the time stamp is that of the finished redraw rather than of a queued one.
         table.update();
-        for (ChartCanvas chart : List.of(bode, step, poles)) {
+        for (ChartCanvas chart : canvases) {
             if (chart.isVisible()) {
                 chart.update();
             }
@@ -394,6 +426,16 @@ public final class LoopAnalysisView extends ViewPart {
         for (Consumer<LoopAnalysis> listener : redrawListeners) {
             listener.accept(outcome.analysis());
         }
+    }
+
+    /** The chart of the tab {@code title} (one of {@link #CHART_TABS}) as now shown; null where it does not apply. */
+    public JFreeChart shownChart(String tabTitle) {
+        int index = CHART_TABS.indexOf(tabTitle);
+        if (index < 0) {
+            throw new IllegalArgumentException("no chart tab '" + tabTitle + "'; the tabs are " + CHART_TABS);
+        }
+        ensureChart(index);
+        return canvases().get(index).getChart();
     }
 
     /** The title of the loop now on screen, e.g. "Y · position loop" or {@link #TYPED_TITLE}. */
@@ -454,6 +496,15 @@ public final class LoopAnalysisView extends ViewPart {
         numerator.setFocus();
     }
 
-    record Outcome(LoopAnalysis analysis, JFreeChart bode, JFreeChart step, JFreeChart poles, String error) {
+    /** The chart to draw ahead: index into the tabs (−1 for none) and the size to draw at. */
+    record ChartTarget(int index, Point size) {
+    }
+
+    /** An analysis with the chart on top drawn ahead (tab {@code drawnIndex}); or the reason the input was rejected. */
+    record Outcome(LoopAnalysis analysis, int drawnIndex, ChartCanvas.Drawn drawn, String error) {
+
+        static Outcome rejected(String reason) {
+            return new Outcome(null, -1, ChartCanvas.Drawn.NONE, reason);
+        }
     }
 }
