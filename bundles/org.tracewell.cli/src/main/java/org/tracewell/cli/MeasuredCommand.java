@@ -33,6 +33,7 @@ import org.tracewell.core.analysis.ContourResult;
 import org.tracewell.core.analysis.MachineAnalysis;
 import org.tracewell.core.analysis.MachineAnalyzer;
 import org.tracewell.core.io.LoadProblem;
+import org.tracewell.core.io.LoadedModel;
 import org.tracewell.core.io.ModelFiles;
 import org.tracewell.core.io.ModelLoadException;
 import org.tracewell.core.mapping.EngineMapping;
@@ -40,11 +41,15 @@ import org.tracewell.core.mapping.MachineInputs;
 import org.tracewell.core.mapping.MappedAxis;
 import org.tracewell.core.mapping.MappedContour;
 import org.tracewell.core.mapping.MappingException;
+import org.tracewell.core.mapping.PlantAttributeChange;
+import org.tracewell.core.mapping.PlantParameterUpdate;
+import org.tracewell.core.mapping.UpdatedAxisModel;
+import org.tracewell.core.validation.ModelValidation;
+import org.tracewell.core.validation.ValidationProblem;
 import org.tracewell.engine.axis.AxisPlant;
 import org.tracewell.engine.axis.Resonance;
 import org.tracewell.engine.budget.BudgetLine;
 import org.tracewell.engine.contour.CircleTestResult;
-import org.tracewell.engine.path.ArcSegment;
 import org.tracewell.engine.measured.CircleFigure;
 import org.tracewell.engine.measured.Iso230Positioning;
 import org.tracewell.engine.measured.MeasuredBudgetLines;
@@ -67,9 +72,14 @@ import org.tracewell.engine.measured.PositioningMeasurement;
 import org.tracewell.engine.measured.ResponseComparison;
 import org.tracewell.engine.measured.TargetStatistics;
 import org.tracewell.engine.measured.TwoMassParameters;
+import org.tracewell.engine.path.ArcSegment;
 import org.tracewell.engine.tf.FrequencyResponse;
 import org.tracewell.engine.tf.TransferFunction;
 import org.tracewell.engine.units.TradeUnits;
+import org.tracewell.model.Axis;
+import org.tracewell.model.Machine;
+import org.tracewell.model.units.TradeUnit;
+import org.tracewell.model.units.UnitTable;
 import org.tracewell.report.PredictedCircleRuns;
 
 /**
@@ -89,6 +99,8 @@ public final class MeasuredCommand {
             "                    (--axis defaults to the file's '# axis:' line)",
             "    --current-loop-hz F    current-loop bandwidth for the fit without --machine (default: ideal)",
             "    --band-hz LO,HI        fit only this frequency band",
+            "    --write-updated OUT    with --fit and --machine: write the machine (or the library .axis file the",
+            "                    axis comes from) with the fitted plant to the new file OUT; the input stays as it is",
             "  circle FILE       circular test (angle_deg,radial_deviation_um or x_mm,y_mm, optional direction;",
             "                    '# radius_mm:' and '# feed_m_min:' lines): ISO 230-4 G, F, G(b)",
             "    --machine FILE [--contour NAME]   overlay the simulated circle of the same radius and feed",
@@ -115,7 +127,15 @@ public final class MeasuredCommand {
 
     private record Options(Kind kind, Path file, boolean json, Optional<Path> out, Optional<PlantFitModel> fit,
             Optional<Path> machine, Optional<String> axis, Optional<String> contour, Optional<Double> currentLoopHz,
-            double bandLowHz, double bandHighHz) {
+            double bandLowHz, double bandHighHz, Optional<Path> writeUpdated) {
+    }
+
+    /** A machine as loaded (for writing an updated copy) and as mapped to engine inputs. */
+    private record LoadedMachine(Path file, LoadedModel model, MachineInputs inputs) {
+    }
+
+    /** The axis a frequency response belongs to: its model element and its engine inputs. */
+    private record FittedAxis(LoadedMachine machine, Axis element, MappedAxis mapped) {
     }
 
     /** A user-input problem; the message is printed as it is (it names file, option or element). */
@@ -222,6 +242,7 @@ public final class MeasuredCommand {
         Double currentLoopHz = null;
         double bandLow = 0;
         double bandHigh = Double.POSITIVE_INFINITY;
+        Path writeUpdated = null;
         for (int i = 1; i < args.length; i++) {
             String a = args[i];
             switch (a) {
@@ -234,6 +255,7 @@ public final class MeasuredCommand {
                 case "--machine" -> machine = Path.of(value(args, ++i, a));
                 case "--axis" -> axis = only(kind, a, value(args, ++i, a), Kind.FRF, Kind.POSITIONING);
                 case "--contour" -> contour = only(kind, a, value(args, ++i, a), Kind.CIRCLE);
+                case "--write-updated" -> writeUpdated = Path.of(only(kind, a, value(args, ++i, a), Kind.FRF));
                 case "--fit" -> {
                     String model = only(kind, a, value(args, ++i, a), Kind.FRF);
                     fit = switch (model) {
@@ -283,9 +305,13 @@ public final class MeasuredCommand {
         if (kind == Kind.FRF && axis != null && machine == null) {
             throw new IllegalArgumentException("--axis " + axis + " needs --machine FILE for a frequency response");
         }
+        if (writeUpdated != null && (fit == null || machine == null)) {
+            throw new IllegalArgumentException("--write-updated " + writeUpdated + " needs --fit rigid|two-mass and"
+                    + " --machine FILE: it writes the fit into that machine's axis");
+        }
         return new Options(kind, file, json, Optional.ofNullable(dir), Optional.ofNullable(fit),
                 Optional.ofNullable(machine), Optional.ofNullable(axis), Optional.ofNullable(contour),
-                Optional.ofNullable(currentLoopHz), bandLow, bandHigh);
+                Optional.ofNullable(currentLoopHz), bandLow, bandHigh, Optional.ofNullable(writeUpdated));
     }
 
     private static String value(String[] args, int i, String option) {
@@ -327,17 +353,20 @@ public final class MeasuredCommand {
 
     private static Outcome frf(Options o) throws MeasuredDataException, IOException, BadInput {
         MeasuredFrequencyResponse measured = MeasuredFrequencyResponse.read(o.file());
-        Optional<MappedAxis> axis = Optional.empty();
+        Optional<FittedAxis> fitted = Optional.empty();
         if (o.machine().isPresent()) {
             String name = o.axis().or(() -> measured.source().metadata("axis")).orElseThrow(() -> new BadInput(
                     "tracewell measured: --machine needs --axis NAME (the file has no '# axis:' line)"));
-            axis = Optional.of(axis(loadMachine(o.machine().get()), name, o.machine().get()));
+            LoadedMachine machine = loadMachine(o.machine().get());
+            MappedAxis mapped = axis(machine.inputs(), name, machine.file());
+            fitted = Optional.of(new FittedAxis(machine, modelAxis(machine.model().machine(), mapped.id()), mapped));
         }
-        return frf(o, measured, axis);
+        return frf(o, measured, fitted);
     }
 
-    private static Outcome frf(Options o, MeasuredFrequencyResponse measured, Optional<MappedAxis> axis)
+    private static Outcome frf(Options o, MeasuredFrequencyResponse measured, Optional<FittedAxis> fittedAxis)
             throws BadInput {
+        Optional<MappedAxis> axis = fittedAxis.map(FittedAxis::mapped);
         double currentLoop = axis.map(a -> a.model().plant().currentLoopBandwidth())
                 .orElse(o.currentLoopHz().map(hz -> 2 * Math.PI * hz).orElse(Double.POSITIVE_INFINITY));
         PlantFitOptions fitOptions = PlantFitOptions.defaults().withCurrentLoopBandwidth(currentLoop)
@@ -354,6 +383,10 @@ public final class MeasuredCommand {
         Optional<PlantUpdate> update = Optional.empty();
         if (fit.isPresent() && plant.isPresent()) {
             update = Optional.of(PlantUpdate.of(plant.get(), fit.get()));
+        }
+        Optional<UpdatedAxisModel> written = Optional.empty();
+        if (o.writeUpdated().isPresent() && update.isPresent()) {
+            written = Optional.of(writeUpdated(o, fittedAxis.orElseThrow(), update.get()));
         }
         Optional<ResponseComparison> modelVsMeasured = plant.map(p -> ResponseComparison.of(measured,
                 p.torqueCommandToMotorVelocity()));
@@ -399,8 +432,10 @@ public final class MeasuredCommand {
             }
             update.get().notes().forEach(n -> lines.add("  note: " + n));
         }
+        written.ifPresent(w -> writtenSummary(lines, o, w));
         if (fit.isPresent()) {
-            lines.add("Caution: " + SafetyCaution.SHORT);
+            // A written axis is about to be applied: the whole caution, not the one-line form.
+            lines.add("Caution: " + (written.isPresent() ? SafetyCaution.TEXT : SafetyCaution.SHORT));
         }
 
         JsonObject json = header("frf", o.file(), source);
@@ -423,6 +458,7 @@ public final class MeasuredCommand {
         }
         json.add("fit", fit.<JsonElement>map(MeasuredCommand::fitJson).orElse(JsonNull.INSTANCE));
         json.add("updatedPlant", update.<JsonElement>map(MeasuredCommand::updateJson).orElse(JsonNull.INSTANCE));
+        json.add("updatedModel", written.<JsonElement>map(w -> writtenJson(o, w)).orElse(JsonNull.INSTANCE));
         if (fit.isPresent()) {
             json.addProperty("caution", SafetyCaution.TEXT);
         }
@@ -534,6 +570,97 @@ public final class MeasuredCommand {
         return o;
     }
 
+    /** The model element behind a mapped axis (inline or from a library file), by its id. */
+    private static Axis modelAxis(Machine machine, String id) {
+        List<Axis> all = new ArrayList<>(machine.getAxes());
+        all.addAll(machine.getLibraryAxes());
+        return all.stream().filter(a -> id.equals(a.getId())).findFirst()
+                .orElseThrow(() -> new IllegalStateException("mapped axis " + id + " is not in the machine it came from"));
+    }
+
+    /**
+     * Writes the fit into a copy of the machine (or of the library axis file) at --write-updated OUT: refused, with
+     * nothing written, when the kinds differ, the copy does not validate, or OUT is a file the model is read from.
+     */
+    private static UpdatedAxisModel writeUpdated(Options o, FittedAxis axis, PlantUpdate update) throws BadInput {
+        Path machineFile = axis.machine().file();
+        Path out = o.writeUpdated().orElseThrow();
+        UpdatedAxisModel updated;
+        try {
+            updated = PlantParameterUpdate.apply(axis.element(), o.fit().orElseThrow(), update.updated());
+        } catch (MappingException e) {
+            String notes = update.notes().isEmpty() ? "" : " (" + String.join("; ", update.notes()) + ")";
+            throw new BadInput(machineFile + ": error: cannot write the fit: " + e.getMessage() + notes);
+        }
+        List<String> errors = new ArrayList<>();
+        for (ValidationProblem p : new ModelValidation().validate(updated.copy())) {
+            if (p.severity() == ValidationProblem.Severity.ERROR) {
+                errors.add(out + ": error: the updated " + p.element().eClass().getName() + " would be invalid: "
+                        + p.message());
+            }
+        }
+        if (!errors.isEmpty()) {
+            throw new BadInput(String.join(System.lineSeparator(), errors) + System.lineSeparator() + out
+                    + ": nothing written");
+        }
+        try {
+            updated.write(out, new ModelFiles());
+        } catch (IllegalArgumentException e) {
+            throw new BadInput("tracewell measured: --write-updated " + e.getMessage());
+        } catch (IOException e) {
+            throw new BadInput(out + ": error: cannot write: " + e.getMessage());
+        }
+        return updated;
+    }
+
+    private static void writtenSummary(List<String> lines, Options o, UpdatedAxisModel w) {
+        String source = w.originalFile().map(Path::toString).orElse(o.machine().orElseThrow().toString());
+        lines.add("Updated " + (w.fromLibrary() ? "library axis" : "machine") + " written to "
+                + o.writeUpdated().orElseThrow() + " (a copy of " + source + ", which is unchanged): axis "
+                + w.axis().getName() + ", plant " + w.axis().getPlant().getId());
+        for (PlantAttributeChange c : w.changes()) {
+            TradeUnit unit = tradeUnit(c);
+            String shownUnit = "1".equals(unit.symbol()) ? "" : " " + unit.symbol();
+            row(lines, c.label(), fmt(unit.fromSi(c.oldValue())) + " → " + fmt(unit.fromSi(c.newValue())) + shownUnit
+                    + (Double.isFinite(c.relativeChange())
+                            ? String.format(Locale.ROOT, "  (%+.1f %%)", c.relativeChange() * 100) : ""));
+        }
+        if (w.fromLibrary()) {
+            lines.add("  note: " + o.machine().orElseThrow().getFileName() + " still references " + source
+                    + "; point it at the new file once the axis is reviewed");
+        }
+    }
+
+    /** The trade unit the model shows an attribute in (its ecore display unit), or the SI unit it is stored in. */
+    private static TradeUnit tradeUnit(PlantAttributeChange c) {
+        return UnitTable.find(c.displayUnit()).or(() -> UnitTable.find(c.unit()))
+                .orElse(new TradeUnit(c.unit(), c.unit(), 1.0, false, 0));
+    }
+
+    private static JsonObject writtenJson(Options o, UpdatedAxisModel w) {
+        JsonObject j = new JsonObject();
+        j.addProperty("file", o.writeUpdated().orElseThrow().toString());
+        j.addProperty("copyOf", w.originalFile().map(Path::toString).orElse(""));
+        j.addProperty("libraryAxis", w.fromLibrary());
+        j.addProperty("axis", w.axis().getName());
+        JsonArray changes = new JsonArray();
+        for (PlantAttributeChange c : w.changes()) {
+            TradeUnit unit = tradeUnit(c);
+            JsonObject change = new JsonObject();
+            change.addProperty("element", c.elementId());
+            change.addProperty("attribute", c.attribute());
+            change.add("before", number(unit.fromSi(c.oldValue())));
+            change.add("after", number(unit.fromSi(c.newValue())));
+            change.addProperty("unit", unit.symbol());
+            change.add("beforeSi", number(c.oldValue()));
+            change.add("afterSi", number(c.newValue()));
+            change.addProperty("siUnit", c.unit());
+            changes.add(change);
+        }
+        j.add("changes", changes);
+        return j;
+    }
+
     // ------------------------------------------------------------------------------------------- circle
 
     private static Outcome circle(Options o) throws MeasuredDataException, IOException, BadInput {
@@ -618,7 +745,7 @@ public final class MeasuredCommand {
      */
     private static ContourResult predictedCircle(Options o, MeasuredCircleTest test) throws BadInput {
         Path file = o.machine().get();
-        MachineInputs inputs = loadMachine(file);
+        MachineInputs inputs = loadMachine(file).inputs();
         List<String> circles = new ArrayList<>();
         String chosen = o.contour().orElse(null);
         for (MappedContour c : inputs.contours()) {
@@ -768,12 +895,13 @@ public final class MeasuredCommand {
 
     // ------------------------------------------------------------------------------------------- shared
 
-    private static MachineInputs loadMachine(Path file) throws BadInput {
+    private static LoadedMachine loadMachine(Path file) throws BadInput {
         if (!Files.isRegularFile(file)) {
             throw new BadInput(file + ": error: no such file; give a .machine file");
         }
         try {
-            return EngineMapping.map(new ModelFiles().loadMachine(file));
+            LoadedModel model = new ModelFiles().load(file);
+            return new LoadedMachine(file, model, EngineMapping.map(model.machine()));
         } catch (ModelLoadException e) {
             List<String> problems = new ArrayList<>();
             for (LoadProblem problem : e.problems()) {

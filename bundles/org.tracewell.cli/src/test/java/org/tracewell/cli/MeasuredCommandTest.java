@@ -1,6 +1,8 @@
 package org.tracewell.cli;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
@@ -9,6 +11,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Set;
+import java.util.TreeSet;
 
 import javax.imageio.ImageIO;
 
@@ -20,6 +24,7 @@ import com.google.gson.JsonParser;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracewell.core.Examples;
+import org.tracewell.core.SafetyCaution;
 
 /**
  * {@code tracewell measured} on the LM-3020 demo measurements in examples/measurements/ (invented data; the values
@@ -34,10 +39,14 @@ class MeasuredCommandTest {
     }
 
     private static Run measured(String... args) {
+        return tracewell(prepend("measured", args));
+    }
+
+    private static Run tracewell(String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = new TracewellCommand().run(prepend("measured", args),
-                new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8));
+        int code = new TracewellCommand().run(args, new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8));
         return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
     }
 
@@ -195,5 +204,113 @@ class MeasuredCommandTest {
         Run help = measured("--help");
         assertEquals(ExitCode.OK, help.code());
         assertTrue(help.out().contains("tracewell measured frf|circle|positioning FILE"));
+    }
+
+    // ------------------------------------------------------------------------------------------- --write-updated
+
+    @Test
+    void fittedYIsWrittenAsAnUpdatedMachineThatValidatesAndDiffsByExactlyTheFittedAttributes() throws Exception {
+        Path examples = Examples.copyTo(tmp.resolve("examples"));
+        Path machine = examples.resolve(Examples.LM_3020);
+        byte[] input = Files.readAllBytes(machine);
+        Path updated = examples.resolve("LM-3020-y-fitted.machine");
+        Path dir = tmp.resolve("frf");
+        Run run = measured("frf", example("lm3020-y-frf.csv"), "--fit", "two-mass", "--machine", machine.toString(),
+                "--write-updated", updated.toString(), "--out", dir.toString());
+        assertEquals(ExitCode.OK, run.code(), run.err());
+        assertTrue(run.out().contains("Updated machine written to " + updated + " (a copy of " + machine
+                + ", which is unchanged): axis Y, plant lm3020-y-plant"), run.out());
+        // Trade units of the model (ecore display units): kg·cm², kg, N/µm, %, N·s/m.
+        assertTrue(run.out().contains("  motor inertia            4.600 → "), run.out());
+        assertTrue(run.out().contains(" kg·cm²  ("), run.out());
+        assertTrue(run.out().contains("  damping ratio            3.000 → "), run.out());
+        assertTrue(run.out().contains("Caution: " + SafetyCaution.TEXT), "the full caution: the axis will be applied");
+        assertArrayEquals(input, Files.readAllBytes(machine), "the input machine is never written");
+        assertTrue(Files.notExists(examples.resolve(Examples.LM_3020 + ".bak")), "not even a backup of the input");
+
+        JsonArray changes = jsonFile(dir.resolve("lm3020-y-frf.json")).getAsJsonObject("updatedModel")
+                .getAsJsonArray("changes");
+        Set<String> attributes = new TreeSet<>();
+        for (JsonElement c : changes) {
+            attributes.add(c.getAsJsonObject().get("attribute").getAsString().replaceAll("([a-z])([A-Z])", "$1 $2")
+                    .toLowerCase(java.util.Locale.ROOT));
+        }
+        assertEquals(Set.of("motor inertia", "load mass", "nut stiffness", "damping ratio", "viscous friction"),
+                attributes, "exactly what a two-mass fit determines");
+
+        Run validate = tracewell("validate", updated.toString());
+        assertEquals(ExitCode.OK, validate.code(), validate.out());
+        Run diff = tracewell("diff", machine.toString(), updated.toString());
+        assertEquals(DiffCommand.DIFFERENT, diff.code(), diff.out() + diff.err());
+        Set<String> diffed = new TreeSet<>();
+        for (String line : diff.out().lines().toList()) {
+            if (line.startsWith("~ ")) {
+                assertTrue(line.startsWith("~ plant (TwoMassDrive) [lm3020-y-plant] of Axis 'Y' [lm3020-y] › "), line);
+                diffed.add(line.substring(line.indexOf("› ") + 2, line.indexOf(':', line.indexOf("› "))));
+            } else {
+                assertFalse(line.startsWith("+ ") || line.startsWith("- "), line);
+            }
+        }
+        // Every fitted value moves by more than diff's 4 significant digits on this measurement (deterministic fit).
+        assertEquals(attributes, diffed, diff.out());
+        assertTrue(diff.out().contains("load mass: 180 kg → "), diff.out()); // old value in display units
+    }
+
+    @Test
+    void aLibraryAxisIsWrittenAsANewAxisFileAndTheLibraryFileIsNeverOverwritten() throws Exception {
+        Path examples = Examples.copyTo(tmp.resolve("examples"));
+        Path machine = examples.resolve(Examples.LM_3020);
+        Path library = examples.resolve(Examples.SHARED_Z);
+        byte[] shared = Files.readAllBytes(library);
+        // The Y response fitted as a rigid inertia onto the Z slide: a rigid screw drive, so the kinds agree.
+        Run refused = measured("frf", example("lm3020-y-frf.csv"), "--fit", "rigid", "--machine", machine.toString(),
+                "--axis", "Z", "--write-updated", library.toString());
+        assertEquals(ExitCode.BAD_INPUT, refused.code(), refused.out());
+        assertTrue(refused.err().contains("refusing to overwrite the library file axis 'Z' comes from " + library),
+                refused.err());
+        assertArrayEquals(shared, Files.readAllBytes(library));
+
+        Path updated = examples.resolve("library/z-slide-25x5-fitted.axis");
+        Run run = measured("frf", example("lm3020-y-frf.csv"), "--fit", "rigid", "--machine", machine.toString(),
+                "--axis", "Z", "--write-updated", updated.toString());
+        assertEquals(ExitCode.OK, run.code(), run.err());
+        assertTrue(run.out().contains("Updated library axis written to " + updated), run.out());
+        assertTrue(run.out().contains("note: LM-3020.machine still references " + library), run.out());
+        assertArrayEquals(shared, Files.readAllBytes(library), "the shared library file is unchanged");
+        assertEquals(ExitCode.OK, tracewell("validate", updated.toString()).code());
+        Run diff = tracewell("diff", library.toString(), updated.toString());
+        List<String> changed = diff.out().lines().filter(l -> l.startsWith("~ ")).toList();
+        assertEquals(2, changed.size(), diff.out());
+        assertTrue(changed.get(0).contains("[z-slide-25x5-plant] of Axis 'Z' [z-slide-25x5] › viscous friction: 900"
+                + " N·s/m → "), diff.out());
+        assertTrue(changed.get(1).contains("[z-slide-25x5-plant] of Axis 'Z' [z-slide-25x5] › load mass: 95 kg → "),
+                diff.out());
+    }
+
+    @Test
+    void writeUpdatedRefusesTheInputAnotherKindAndMissingOptionsWritingNothing() throws Exception {
+        Path examples = Examples.copyTo(tmp.resolve("examples"));
+        Path machine = examples.resolve(Examples.LM_3020);
+        byte[] input = Files.readAllBytes(machine);
+        Run self = measured("frf", example("lm3020-y-frf.csv"), "--fit", "two-mass", "--machine", machine.toString(),
+                "--write-updated", examples.resolve("library/../" + Examples.LM_3020).toString());
+        assertEquals(ExitCode.BAD_INPUT, self.code(), self.out());
+        assertTrue(self.err().contains("refusing to overwrite the input file " + machine), self.err());
+        assertArrayEquals(input, Files.readAllBytes(machine));
+
+        Path out = tmp.resolve("never.machine");
+        Run kind = measured("frf", example("lm3020-y-frf.csv"), "--fit", "rigid", "--machine", machine.toString(),
+                "--axis", "Y", "--write-updated", out.toString());
+        assertEquals(ExitCode.BAD_INPUT, kind.code(), kind.out());
+        assertTrue(kind.err().contains("Axis 'Y' [lm3020-y]: the model's plant is a two-mass drive (TwoMassDrive)"
+                + " but the fit is a rigid inertia fit"), kind.err());
+        assertTrue(Files.notExists(out));
+
+        Run noMachine = measured("frf", example("lm3020-y-frf.csv"), "--fit", "two-mass", "--write-updated",
+                out.toString());
+        assertEquals(ExitCode.BAD_INPUT, noMachine.code());
+        assertTrue(noMachine.err().contains("--write-updated " + out + " needs --fit rigid|two-mass and --machine"),
+                noMachine.err());
+        assertTrue(Files.notExists(out));
     }
 }
