@@ -94,4 +94,24 @@ class TradeLabelsTest {
         m.getAxes().add(y);
         assertEquals("LM-3020 · 1 axis", TradeLabels.text(m));
     }
+
+    @Test
+    void inchSystemShowsLengthsInInches() {
+        try {
+            org.tracewell.model.units.UnitSystem.activate(org.tracewell.model.units.UnitSystem.INCH);
+            // 10 mm lead = 0.3937 in (10 / 25.4, international inch); 50 1/s = 3.0 (in/min)/mil = 3.0 (m/min)/mm
+            // (common practice: both are 1000/60 1/s).
+            assertEquals("Y · ball screw 0.3937 in · Kv 3.0 (in/min)/mil", TradeLabels.text(yAxis()));
+            Requirement g = F.createRequirement();
+            g.setId("lm3020-r1");
+            g.setKind(RequirementKind.CONTOUR_DEVIATION);
+            g.setMetric(ContourMetric.CIRCULAR_DEVIATION);
+            g.setLimit(25e-6);
+            g.setDisplayUnit("µm");
+            // 25 µm = 984.3 µin (25e-6 / 25.4e-9).
+            assertEquals("lm3020-r1 · circular deviation G ≤ 984.3 µin", TradeLabels.text(g));
+        } finally {
+            org.tracewell.model.units.UnitSystem.activate(org.tracewell.model.units.UnitSystem.METRIC);
+        }
+    }
 }
