@@ -44,6 +44,19 @@ public enum UnitSystem {
         return INCH_FOR_METRIC.getOrDefault(metricUnit.strip(), metricUnit);
     }
 
+    /**
+     * How many {@link #shown(String) shown} units one {@code metricUnit} is (1 when this system shows it unchanged),
+     * to turn a value already converted to the metric unit into the shown one: 1 mm → 0.03937 in. Only for linear
+     * units (every unit this system replaces is linear).
+     */
+    public double perMetricUnit(String metricUnit) {
+        String shown = shown(metricUnit);
+        if (shown == null || shown.equals(metricUnit)) {
+            return 1.0;
+        }
+        return UnitTable.get(metricUnit).toSi(1.0) / UnitTable.get(shown).toSi(1.0);
+    }
+
     /** The system the workbench shows values in; {@link #METRIC} unless the workbench chose otherwise. */
     public static UnitSystem active() {
         return active;

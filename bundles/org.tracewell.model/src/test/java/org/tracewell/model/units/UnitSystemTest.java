@@ -46,6 +46,10 @@ class UnitSystemTest {
         assertEquals("Hz", UnitSystem.INCH.shown("Hz"));
         assertEquals("rev/min", UnitSystem.INCH.shown("rev/min"));
         assertEquals("mm", UnitSystem.METRIC.shown("mm"));
+        // 1 µm = 39.37 µin (1e-6 / 25.4e-9); a margin already in µm becomes one in µin by the same factor.
+        assertEquals(1e-6 / 25.4e-9, UnitSystem.INCH.perMetricUnit("µm"), 1e-12);
+        assertEquals(1.0, UnitSystem.INCH.perMetricUnit("deg"), 0.0);
+        assertEquals(1.0, UnitSystem.METRIC.perMetricUnit("µm"), 0.0);
         for (String metric : new String[] {"mm", "µm", "m/min", "mm/min", "(m/min)/mm", "mm/rev", "m/s²", "m/s³"}) {
             TradeUnit inch = UnitTable.get(UnitSystem.INCH.shown(metric));
             assertEquals(UnitTable.get(metric).siSymbol(), inch.siSymbol(), metric + " and its inch unit measure alike");
