@@ -94,20 +94,7 @@ public record MachineTemplate(String name, double positionSamplePeriod, double v
         Axis y = axis("Y", 90.0, 140_000.0);
         machine.getAxes().add(x);
         machine.getAxes().add(y);
-
-        Contour circle = F.createContour();
-        circle.setName("circle R50 F2 CCW");
-        circle.setDescription("ISO 230-4 circular test in XY, counter-clockwise.");
-        circle.setFeed(CIRCLE_FEED);
-        circle.setPathAcceleration(1.0);
-        circle.setPathJerk(20.0);
-        circle.setSamplePeriod(1e-3);
-        circle.setStartX(CIRCLE_RADIUS);
-        circle.getAxisAssignment().add(x);
-        circle.getAxisAssignment().add(y);
-        FullCircle segment = F.createFullCircle();
-        segment.setDirection(Direction.COUNTER_CLOCKWISE);
-        circle.getSegments().add(segment);
+        Contour circle = circleTest(x, y);
         machine.getContours().add(circle);
 
         Requirement g = F.createRequirement();
@@ -122,6 +109,35 @@ public record MachineTemplate(String name, double positionSamplePeriod, double v
         g.setRationale("Template target; set the machine's own.");
         machine.getRequirements().add(g);
         return machine;
+    }
+
+    /** A new axis like the template's X (150 kg load), at this template's loop periods. */
+    public Axis newAxis(String axisName) {
+        return axis(axisName, 150.0, 160_000.0);
+    }
+
+    /**
+     * The template's circle test (R = 50 mm at 2 m/min, counter-clockwise, ISO 230-4) in the plane of {@code u} and
+     * {@code v}; either may be null to be assigned later.
+     */
+    public Contour circleTest(Axis u, Axis v) {
+        Contour circle = F.createContour();
+        circle.setName("circle R50 F2 CCW");
+        circle.setDescription("ISO 230-4 circular test, counter-clockwise.");
+        circle.setFeed(CIRCLE_FEED);
+        circle.setPathAcceleration(1.0);
+        circle.setPathJerk(20.0);
+        circle.setSamplePeriod(1e-3);
+        circle.setStartX(CIRCLE_RADIUS);
+        for (Axis axis : new Axis[] {u, v}) {
+            if (axis != null) {
+                circle.getAxisAssignment().add(axis);
+            }
+        }
+        FullCircle segment = F.createFullCircle();
+        segment.setDirection(Direction.COUNTER_CLOCKWISE);
+        circle.getSegments().add(segment);
+        return circle;
     }
 
     /**
