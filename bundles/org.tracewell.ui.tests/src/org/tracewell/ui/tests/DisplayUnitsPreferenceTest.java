@@ -15,6 +15,7 @@ import org.eclipse.ui.PlatformUI;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tracewell.model.Axis;
 import org.tracewell.model.CascadeController;
 import org.tracewell.model.TracewellPackage.Literals;
 import org.tracewell.model.units.UnitSystem;
@@ -59,6 +60,13 @@ class DisplayUnitsPreferenceTest {
         assertEquals(50.0, controller.getPositionGain(), 1e-9, "3 (in/min)/mil = 50 1/s");
         // A metric entry is still understood.
         assertTrue(editor.valueEntry().enter(controller, Literals.CASCADE_CONTROLLER__POSITION_GAIN, "2.4 (m/min)/mm")
+                .isEmpty());
+        assertEquals(40.0, controller.getPositionGain(), 1e-9);
+        // The inch trade's shorthand: 787.4 ipm = 787.4 · 0.0254 m/min = 20.0 m/min; 2.4 ipm/mil = 40 1/s.
+        Axis y = editor.model().machine().getAxes().get(2);
+        assertTrue(editor.valueEntry().enter(y, Literals.AXIS__MAX_VELOCITY, "787.4 ipm").isEmpty());
+        assertEquals(20.0 / 60.0, y.getMaxVelocity(), 1e-5 * 20.0 / 60.0, "787.4 ipm is 20 m/min to 4 digits");
+        assertTrue(editor.valueEntry().enter(controller, Literals.CASCADE_CONTROLLER__POSITION_GAIN, "2.4 ipm/mil")
                 .isEmpty());
         assertEquals(40.0, controller.getPositionGain(), 1e-9);
 

@@ -1,5 +1,6 @@
 package org.tracewell.ui.tests;
 
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -42,5 +43,15 @@ class WorkbenchMenusTest {
                 "Window/Properties", "Window/Preferences...", "Help/Getting Started", "Help/About Tracewell")) {
             assertTrue(all.contains(expected), expected + " not in " + all);
         }
+    }
+
+    @Test
+    void workspaceResourceWizardsOfTheIdeAreHiddenAndTracewellMachineIsOffered() {
+        var activities = PlatformUI.getWorkbench().getActivitySupport().getActivityManager();
+        assertFalse(activities.getIdentifier("org.eclipse.ui.ide/org.eclipse.ui.wizards.new.project").isEnabled());
+        assertFalse(activities.getIdentifier("org.eclipse.ui.ide/org.eclipse.ui.wizards.new.file").isEnabled());
+        assertTrue(activities.getIdentifier("org.tracewell.ui/org.tracewell.ui.wizard.newMachine").isEnabled());
+        assertTrue(PlatformUI.getWorkbench().getNewWizardRegistry().findWizard("org.tracewell.ui.wizard.newMachine")
+                != null);
     }
 }

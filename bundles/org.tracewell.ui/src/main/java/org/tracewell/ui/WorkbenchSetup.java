@@ -6,12 +6,14 @@ import org.eclipse.core.resources.ResourcesPlugin;
 import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.ILog;
 import org.eclipse.core.runtime.Platform;
+import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.jface.preference.IPreferenceNode;
 import org.eclipse.jface.preference.PreferenceManager;
 import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.ide.IDE;
 import org.osgi.framework.Bundle;
 import org.tracewell.ui.prefs.TracewellPreferences;
+import org.tracewell.ui.problems.ProblemMarkers;
 
 /**
  * What the workbench advisor does for the parts of the platform Tracewell borrows: the display units from the
@@ -47,7 +49,11 @@ final class WorkbenchSetup {
             return; // no marker was ever made: nothing to save
         }
         try {
+            // The editors closed with the workbench and removed their markers in jobs: let those finish first.
+            Job.getJobManager().join(ProblemMarkers.JOB_FAMILY, null);
             ResourcesPlugin.getWorkspace().save(true, null);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
         } catch (CoreException | IllegalStateException e) {
             ILog.of(WorkbenchSetup.class).error("The workspace (problem-marker links) was not saved", e);
         }

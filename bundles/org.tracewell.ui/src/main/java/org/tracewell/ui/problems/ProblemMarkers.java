@@ -42,6 +42,8 @@ public final class ProblemMarkers {
     public static final String TYPE = "org.tracewell.ui.modelProblem";
     /** Marker attribute: URI of the element the finding is about ({@code file:…#id}). */
     public static final String ELEMENT_URI = "org.tracewell.ui.elementUri";
+    /** Family of the jobs that write markers (the workbench waits for them before it saves the workspace). */
+    public static final Object JOB_FAMILY = ProblemMarkers.class;
     /** Marker attribute: the validator's rule code, e.g. {@code tw.positive}. */
     public static final String RULE = "org.tracewell.ui.rule";
 
@@ -168,6 +170,11 @@ public final class ProblemMarkers {
             return Job.create(name, monitor -> Status.OK_STATUS);
         }
         WorkspaceJob job = new WorkspaceJob(name) {
+            @Override
+            public boolean belongsTo(Object family) {
+                return family == JOB_FAMILY;
+            }
+
             @Override
             public IStatus runInWorkspace(IProgressMonitor monitor) throws CoreException {
                 try {

@@ -1,6 +1,5 @@
 package org.tracewell.ui.problems;
 
-import java.net.URI;
 import java.nio.file.Path;
 
 import org.eclipse.core.resources.IContainer;
@@ -55,7 +54,7 @@ final class WorkspaceLinks {
 
     /** The link to {@code directory}: an existing one, else a new one named after the folder ("examples (2)" …). */
     private static IFolder linkTo(IProject project, Path directory, IProgressMonitor monitor) throws CoreException {
-        URI location = directory.toUri();
+        IPath location = IPath.fromOSString(directory.toString());
         String base = directory.getFileName() == null ? "root" : directory.getFileName().toString();
         for (int n = 1;; n++) {
             IFolder folder = project.getFolder(n == 1 ? base : base + " (" + n + ")");
