@@ -54,21 +54,23 @@ import org.tracewell.requirements.ReviewResults;
 import org.tracewell.requirements.Verification;
 
 /**
- * {@code tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME…]}: analyses a machine (the bundled LM-3020
- * when no FILE is given), writes results.json and one CSV per contour run into DIR (default ./tracewell-report/),
+ * {@code tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME…] [--author NAME]}: analyses a machine (the
+ * bundled LM-3020 when no FILE is given), writes the report (naming its author when given), results.json and one CSV
+ * per contour run into DIR (default ./tracewell-report/),
  * prints the requirement summary in trade units and the safety caution. Exit 0 all met, 1 any violated, 2 bad input,
  * 3 internal error. Progress goes to stderr.
  */
 public final class AnalyzeCommand {
 
-    static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...]";
+    static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...]"
+            + " [--author NAME]";
     static final String DEFAULT_OUT = "tracewell-report";
     static final String EXAMPLE = Examples.LM_3020;
 
     private AnalyzeCommand() {
     }
 
-    private record Options(Path file, Path out, boolean json, List<String> contours) {
+    private record Options(Path file, Path out, boolean json, List<String> contours, String author) {
     }
 
     public static int run(String[] args, PrintStream out, PrintStream err) {
@@ -142,7 +144,7 @@ public final class AnalyzeCommand {
             Files.createDirectories(options.out());
             // The report (charts, mostly) is the slowest part: draw it while the JSON and CSV files are written.
             err.println("writing the design-review report");
-            ReportInput reportInput = ReportInput.of(review, machine);
+            ReportInput reportInput = ReportInput.of(review, machine).withAuthor(options.author());
             CompletableFuture<List<Path>> report = CompletableFuture.supplyAsync(() -> {
                 try {
                     return ReportWriter.write(reportInput, options.out());
@@ -182,6 +184,7 @@ public final class AnalyzeCommand {
         Path dir = Path.of(DEFAULT_OUT);
         boolean json = false;
         List<String> contours = new ArrayList<>();
+        String author = "";
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
             switch (a) {
@@ -197,6 +200,12 @@ public final class AnalyzeCommand {
                         throw new IllegalArgumentException("--out needs a directory");
                     }
                     dir = Path.of(args[++i]);
+                }
+                case "--author" -> {
+                    if (i + 1 >= args.length || args[i + 1].isBlank() || args[i + 1].startsWith("--")) {
+                        throw new IllegalArgumentException("--author needs a name, e.g. --author \"R. Okafor\"");
+                    }
+                    author = args[++i];
                 }
                 case "--contour" -> {
                     int before = contours.size();
@@ -219,7 +228,7 @@ public final class AnalyzeCommand {
                 }
             }
         }
-        return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours);
+        return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours, author);
     }
 
     /** The bundled examples (see {@link Examples#folder()}); a usage error when they cannot be found. */

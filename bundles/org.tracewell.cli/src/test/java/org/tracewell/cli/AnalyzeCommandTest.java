@@ -62,10 +62,19 @@ class AnalyzeCommandTest {
     }
 
     @Test
-    void secondExampleRunsWithJsonOnStdout() {
-        Run run = analyze(Examples.file(Examples.LM_T5).toString(), "--out", tmp.resolve("t5").toString(), "--json");
+    void secondExampleRunsWithJsonOnStdoutAndTheReportNamesItsAuthor() throws Exception {
+        Run run = analyze(Examples.file(Examples.LM_T5).toString(), "--out", tmp.resolve("t5").toString(), "--json",
+                "--author", "T. Reyes");
         assertTrue(run.code() == ExitCode.OK || run.code() == ExitCode.VIOLATED, run.err());
         assertTrue(run.out().trim().startsWith("{") && run.out().contains("\"requirements\""));
+        assertTrue(Files.readString(tmp.resolve("t5/index.html")).contains("· prepared by T. Reyes"));
+    }
+
+    @Test
+    void authorWithoutANameIsBadInput() {
+        Run run = analyze("--out", tmp.resolve("a").toString(), "--author");
+        assertEquals(ExitCode.BAD_INPUT, run.code());
+        assertTrue(run.err().contains("--author needs a name"), run.err());
     }
 
     @Test

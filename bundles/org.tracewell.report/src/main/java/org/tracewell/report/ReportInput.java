@@ -17,13 +17,26 @@ import org.tracewell.requirements.ReviewResults;
  * @param review             analysis, budget, requirements and provenance
  * @param inputs             the mapped machine; empty leaves the parameter columns of the axis table out
  * @param machineDescription free text from the model, may be empty
+ * @param author             who prepares the review (the report names them in the header); may be empty
  */
-public record ReportInput(ReviewResults review, Optional<MachineInputs> inputs, String machineDescription) {
+public record ReportInput(ReviewResults review, Optional<MachineInputs> inputs, String machineDescription,
+        String author) {
 
     public ReportInput {
         Objects.requireNonNull(review, "review results");
         Objects.requireNonNull(inputs, "machine inputs (use Optional.empty() when not available)");
         machineDescription = machineDescription == null ? "" : machineDescription;
+        author = author == null ? "" : author.strip();
+    }
+
+    /** Without an author. */
+    public ReportInput(ReviewResults review, Optional<MachineInputs> inputs, String machineDescription) {
+        this(review, inputs, machineDescription, "");
+    }
+
+    /** The same input, prepared by {@code newAuthor} (empty: no author named). */
+    public ReportInput withAuthor(String newAuthor) {
+        return new ReportInput(review, inputs, machineDescription, newAuthor);
     }
 
     /** Results only: the axis table shows what the analysis carries (Kv, limits, resolution). */

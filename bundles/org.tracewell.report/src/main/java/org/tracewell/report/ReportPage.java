@@ -139,7 +139,8 @@ final class ReportPage {
         page.open("header");
         page.element("h1", "Design review: " + analysis.machineName());
         page.element("p", "subtitle", "Machine " + analysis.machineId() + " · input " + p.inputFile()
-                + " · analysed " + DATE.format(p.analysedAt()) + " · Tracewell " + p.toolVersion());
+                + " · analysed " + DATE.format(p.analysedAt()) + " · Tracewell " + p.toolVersion()
+                + (input.author().isEmpty() ? "" : " · prepared by " + input.author()));
         caution();
         page.open("nav", "contents").element("strong", "Contents").open("ol");
         for (String[] s : SECTIONS) {
@@ -747,6 +748,7 @@ final class ReportPage {
                 new String[] {"Input file", p.inputFile()},
                 new String[] {"Input SHA-256", p.inputSha256()},
                 new String[] {"Analysed at", DATE.format(p.analysedAt())},
+                new String[] {"Prepared by", input.author().isEmpty() ? "(not named)" : input.author()},
                 new String[] {"Contours", p.contourFilter().isEmpty() ? "all" : String.join(", ", p.contourFilter())}));
         List<String> methods = new ArrayList<>();
         methods.add("Step responses: " + StepResponse.METHOD + ".");

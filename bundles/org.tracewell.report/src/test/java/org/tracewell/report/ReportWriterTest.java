@@ -75,9 +75,22 @@ class ReportWriterTest {
     }
 
     @Test
+    void authorIsNamedInTheHeaderAndTheSettingsOnlyWhenGiven(@TempDir Path dir) throws Exception {
+        ReportWriter.write(fullInput().withAuthor("  R. Okafor, controls  "), dir.resolve("named"));
+        String named = html(dir.resolve("named"));
+        assertTrue(named.contains("· prepared by R. Okafor, controls</p>"), "author in the subtitle, trimmed");
+        assertTrue(named.contains("R. Okafor, controls</td>") || named.contains("R. Okafor, controls</dd>"),
+                "author among the settings");
+        ReportWriter.write(fullInput(), dir.resolve("unnamed"));
+        String unnamed = html(dir.resolve("unnamed"));
+        assertFalse(unnamed.contains("prepared by"), "no author, no claim");
+        assertTrue(unnamed.contains("(not named)"));
+    }
+
+    @Test
     void hostileModelStringsAreEscapedAndThePageHasNoScript(@TempDir Path dir) throws Exception {
         ReportInput hostile = new ReportInput(ReportFixtures.hostileReview(lm3020), java.util.Optional.of(lm3020.inputs()),
-                ReportFixtures.HOSTILE + " description");
+                ReportFixtures.HOSTILE + " description", ReportFixtures.HOSTILE + " author");
         ReportWriter.write(hostile, dir);
         String html = html(dir);
         String lower = html.toLowerCase(Locale.ROOT);
@@ -90,6 +103,8 @@ class ReportWriterTest {
                 "rationale escaped");
         assertTrue(html.contains("&lt;script&gt;alert(&#39;x&#39;)&lt;/script&gt; &amp; &quot;quoted&quot; description"),
                 "description escaped");
+        assertTrue(html.contains("prepared by &lt;script&gt;alert(&#39;x&#39;)&lt;/script&gt; &amp; &quot;quoted&quot; author"),
+                "author escaped");
     }
 
     @Test

@@ -28,11 +28,18 @@ final class TracewellWorkbenchAdvisor extends WorkbenchAdvisor {
     public void initialize(IWorkbenchConfigurer configurer) {
         // Layout is restored per workspace, which the launcher keeps per user.
         configurer.setSaveAndRestore(true);
+        WorkbenchSetup.initialize();
+    }
+
+    @Override
+    public void postShutdown() {
+        WorkbenchSetup.postShutdown();
     }
 
     /** Opens the model files named on the command line ({@code tracewell gui FILE.machine}). */
     @Override
     public void postStartup() {
+        WorkbenchSetup.postStartup(getWorkbenchConfigurer().getWorkbench());
         IWorkbenchWindow window = getWorkbenchConfigurer().getWorkbench().getActiveWorkbenchWindow();
         if (window == null || window.getActivePage() == null) {
             return;

@@ -23,9 +23,12 @@ public final class UnitAnnotations {
         return detail(feature, isRotary(owner) ? "rotaryUnit" : null, "unit");
     }
 
-    /** The trade unit the attribute is shown in, for this owner; empty when undeclared. */
+    /**
+     * The trade unit the attribute is shown in, for this owner, in the active {@link UnitSystem} (the declared metric
+     * unit, or its inch counterpart); empty when undeclared.
+     */
     public static String displayUnit(EObject owner, EStructuralFeature feature) {
-        return detail(feature, isRotary(owner) ? "rotaryDisplayUnit" : null, "displayUnit");
+        return UnitSystem.active().shown(detail(feature, isRotary(owner) ? "rotaryDisplayUnit" : null, "displayUnit"));
     }
 
     /** Formats the owner's value of a numeric attribute in its display unit. */

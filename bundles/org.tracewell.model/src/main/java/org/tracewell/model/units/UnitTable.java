@@ -17,6 +17,9 @@ public final class UnitTable {
     /** Significant digits used when printing a value: enough for engineering review, few enough to read. */
     public static final int SIGNIFICANT_DIGITS = 4;
 
+    /** The international inch in metres (exact by definition). */
+    private static final double INCH_M = 0.0254;
+
     private static final Map<String, TradeUnit> UNITS = new LinkedHashMap<>();
 
     static {
@@ -38,6 +41,11 @@ public final class UnitTable {
         si("1/rev");
         // Transmission ratio: load travel per motor radian; the trade quotes travel per motor revolution.
         si("m/rad"); add("mm/rev", "m/rad", 1e-3 / (2.0 * Math.PI));
+        // Inch units (UnitSystem.INCH): the international inch is exactly 25.4 mm; a mil is a thousandth of an inch.
+        add("in", "m", INCH_M); add("µin", "m", INCH_M * 1e-6); add("mil", "m", INCH_M * 1e-3);
+        add("in/min", "m/s", INCH_M / 60.0); add("in/s²", "m/s²", INCH_M); add("in/s³", "m/s³", INCH_M);
+        add("(in/min)/mil", "1/s", 1000.0 / 60.0, false, 1);
+        add("in/rev", "m/rad", INCH_M / (2.0 * Math.PI));
     }
 
     private UnitTable() {

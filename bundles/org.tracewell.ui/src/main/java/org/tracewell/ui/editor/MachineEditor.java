@@ -23,7 +23,28 @@ import org.eclipse.emf.edit.domain.IEditingDomainProvider;
 import org.eclipse.emf.edit.provider.ComposedAdapterFactory;
 import org.eclipse.emf.edit.provider.ReflectiveItemProviderAdapterFactory;
 import org.eclipse.emf.edit.provider.resource.ResourceItemProviderAdapterFactory;
+import org.eclipse.core.resources.IMarker;
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.jface.action.Action;
+import org.eclipse.jface.action.IMenuManager;
+import org.eclipse.jface.action.MenuManager;
+import org.eclipse.jface.action.Separator;
+import org.eclipse.jface.util.IPropertyChangeListener;
+import org.eclipse.jface.viewers.IStructuredSelection;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Listener;
+import org.eclipse.swt.widgets.Shell;
+import org.eclipse.ui.IPageLayout;
+import org.eclipse.ui.IPartListener2;
+import org.eclipse.ui.IWorkbenchPartReference;
+import org.eclipse.ui.ide.IGotoMarker;
+import org.eclipse.ui.views.properties.IPropertySheetPage;
+import org.eclipse.ui.views.properties.PropertySheetPage;
+import org.tracewell.core.validation.ModelValidation;
+import org.tracewell.core.validation.ValidationProblem;
+import org.tracewell.ui.prefs.TracewellPreferences;
+import org.tracewell.ui.problems.ProblemMarkers;
 import org.eclipse.jface.action.IAction;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.jface.viewers.ISelection;
@@ -49,8 +70,14 @@ import org.tracewell.model.provider.TracewellItemProviderAdapterFactory;
  * Axes) as trees with a form for the selected element. Every change is an EMF command on the editor's editing domain,
  * so Edit → Undo/Redo, the dirty mark and File → Save work; saving writes each changed file atomically with a backup
  * ({@link ModelFiles}), including shared library axes edited through the machine.
+ * <p>
+ * Elements are added and deleted from each tree's context menu ({@link ElementCommands}); the Properties view edits
+ * the selected element ({@link ElementPropertySource}); the validation rules run after every change and their findings
+ * are Problems markers on the file ({@link ProblemMarkers}), a double-click selecting the element here. When a file of
+ * the model changes on disk the editor asks before reloading, and it never saves over such a change without asking
+ * ({@link DiskWatch}).
  */
-public final class MachineEditor extends MultiPageEditorPart implements IEditingDomainProvider {
+public final class MachineEditor extends MultiPageEditorPart implements IEditingDomainProvider, IGotoMarker {
 
     public static final String ID = "org.tracewell.ui.editor.machine";
 
@@ -69,6 +96,36 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
     private ValueEntry entry;
     private StackAction undo;
     private StackAction redo;
+    private ElementCommands elementCommands;
+    private ProblemMarkers markers;
+    private DiskWatch diskWatch;
+    private DiskPrompt diskPrompt = DiskPrompt.DIALOGS;
+    private boolean askingAboutDisk;
+    private long validationGeneration;
+    private final IPropertyChangeListener unitsListener = event -> {
+        if (TracewellPreferences.UNIT_SYSTEM.equals(event.getProperty())) {
+            Display.getDefault().asyncExec(this::unitsChanged);
+        }
+    };
+    private final IPartListener2 activation = new IPartListener2() {
+        @Override
+        public void partActivated(IWorkbenchPartReference ref) {
+            if (ref.getPart(false) == MachineEditor.this) {
+                // After the activation finished: a prompt (or a reload) from inside it would disturb the workbench.
+                Display.getDefault().asyncExec(MachineEditor.this::checkDisk);
+            }
+        }
+    };
+    private final Listener shellActivation = event -> {
+        if (getSite().getPage().getActiveEditor() == this) {
+            checkDisk();
+        }
+    };
+
+    /** Milliseconds between looks at the disk while the editor is active (besides on activation). */
+    static final int DISK_CHECK_INTERVAL_MS = 2000;
+    /** Pause after the last model change before the checks run again, ms: one run for a burst of edits. */
+    static final int VALIDATION_DEBOUNCE_MS = 250;
 
     /** Opens {@code file} in a Machine Editor (or activates the one that has it open). */
     public static MachineEditor open(IWorkbenchPage page, Path file) throws PartInitException {
@@ -81,11 +138,12 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
 
     @Override
     public void init(IEditorSite site, IEditorInput input) throws PartInitException {
-        if (!(input instanceof MachineEditorInput fileInput)) {
-            throw new PartInitException("The Machine Editor opens .machine and .axis files from the file system; got "
-                    + input.getClass().getSimpleName() + " " + input.getName());
-        }
-        super.init(site, input);
+        // A workspace file (a marker's, the Problems view) is the same file on disk: the editor works on paths.
+        MachineEditorInput fileInput = input instanceof MachineEditorInput machineInput ? machineInput
+                : MachineEditorMatching.fileOf(input).map(MachineEditorInput::new).orElseThrow(() -> new PartInitException(
+                        "The Machine Editor opens .machine and .axis files from the file system; got "
+                                + input.getClass().getSimpleName() + " " + input.getName()));
+        super.init(site, fileInput);
         adapterFactory = new ComposedAdapterFactory();
         adapterFactory.addAdapterFactory(new ResourceItemProviderAdapterFactory());
         adapterFactory.addAdapterFactory(new TracewellItemProviderAdapterFactory());
@@ -99,12 +157,19 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
             throw new PartInitException("Cannot open " + fileInput.file() + ":\n" + e.getMessage(), e);
         }
         entry = new ValueEntry(domain);
+        elementCommands = new ElementCommands(domain, () -> TracewellPreferences.templateOrDefault(fileInput.getName()));
+        markers = new ProblemMarkers(fileInput.file(), ID);
+        diskWatch = new DiskWatch(modelFiles());
         undo = new StackAction(true, stack);
         redo = new StackAction(false, stack);
         stack.addCommandStackListener(event -> stackChanged());
         setPartName(input.getName());
         setTitleToolTip(fileInput.file().toString());
         site.setSelectionProvider(selectionProvider);
+        TracewellPreferences.store().addPropertyChangeListener(unitsListener);
+        site.getPage().addPartListener(activation);
+        site.getShell().addListener(SWT.Activate, shellActivation);
+        scheduleDiskCheck();
     }
 
     @Override
@@ -124,6 +189,7 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
             addModelPage(AXES_PAGE, "Axis file " + getEditorInput().getName(), input -> List.of(root));
         }
         setActivePage(0);
+        validate();
         // Start with the first axis selected: the form and the Loop Analysis view show something useful at once.
         ModelPage first = pages.get(0);
         Object[] top = ((org.eclipse.jface.viewers.ITreeContentProvider) first.tree().getContentProvider())
@@ -137,6 +203,7 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
         ModelPage page = new ModelPage(getContainer(), title, hint, adapterFactory, entry, roots, this::librarySuffix,
                 this::libraryBanner, model.root());
         pages.add(page);
+        hookContextMenu(page);
         int index = addPage(page.control());
         setPageText(index, title);
         page.tree().addSelectionChangedListener(event -> {
@@ -159,7 +226,286 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
         undo.update();
         redo.update();
         for (ModelPage page : pages) {
+            if (page.form().element() != null && page.form().element().eResource() == null) {
+                page.form().show(null); // its element was deleted
+            }
             page.form().refresh();
+        }
+        long mine = ++validationGeneration;
+        Display.getCurrent().timerExec(VALIDATION_DEBOUNCE_MS, () -> {
+            if (mine == validationGeneration && domain != null) {
+                validate();
+            }
+        });
+    }
+
+    // ------------------------------------------------------------------------------------------------ add and delete
+
+    private void hookContextMenu(ModelPage page) {
+        MenuManager menu = new MenuManager("#PopupMenu");
+        menu.setRemoveAllWhenShown(true);
+        menu.addMenuListener(manager -> fillContextMenu(manager, page));
+        page.tree().getControl().setMenu(menu.createContextMenu(page.tree().getControl()));
+        page.tree().getControl().addListener(SWT.KeyDown, event -> {
+            if (event.keyCode == SWT.DEL && selectedElement(page) instanceof EObject element) {
+                run(elementCommands.delete(element, machineOrNull(), isLibraryAxis(element)), page);
+            }
+        });
+    }
+
+    private void fillContextMenu(IMenuManager manager, ModelPage page) {
+        if (model.root() instanceof Machine machine) {
+            elementCommands.addToMachine(machine, page.title()).ifPresent(edit -> manager.add(action(edit, page)));
+        }
+        Object selected = selectedElement(page);
+        if (selected instanceof EObject element) {
+            List<ElementCommands.Edit> children = elementCommands.newChildren(element);
+            if (!children.isEmpty()) {
+                MenuManager newChild = new MenuManager("&New");
+                children.forEach(edit -> newChild.add(action(edit, page)));
+                manager.add(newChild);
+            }
+            manager.add(new Separator());
+            IAction delete = action(elementCommands.delete(element, machineOrNull(), isLibraryAxis(element)), page);
+            delete.setAccelerator(SWT.DEL);
+            manager.add(delete);
+        }
+        manager.add(new Separator());
+        manager.add(new Action("Show &Properties") {
+            @Override
+            public void run() {
+                showView(IPageLayout.ID_PROP_SHEET);
+            }
+        });
+    }
+
+    private IAction action(ElementCommands.Edit edit, ModelPage page) {
+        Action action = new Action(edit.label()) {
+            @Override
+            public void run() {
+                MachineEditor.this.run(edit, page);
+            }
+        };
+        action.setEnabled(edit.command().canExecute());
+        return action;
+    }
+
+    /** Executes an add or delete and selects what it created (or the parent of what it deleted). */
+    private void run(ElementCommands.Edit edit, ModelPage page) {
+        elementCommands.execute(edit).ifPresent(affected -> {
+            if (affected instanceof EObject e && e.eResource() != null) {
+                page.select(e);
+            }
+        });
+    }
+
+    /** The add and delete commands, for handlers and tests. */
+    public ElementCommands elementCommands() {
+        return elementCommands;
+    }
+
+    private static Object selectedElement(ModelPage page) {
+        return ((IStructuredSelection) page.tree().getSelection()).getFirstElement();
+    }
+
+    private Machine machineOrNull() {
+        return model.root() instanceof Machine machine ? machine : null;
+    }
+
+    private void showView(String id) {
+        try {
+            getSite().getPage().showView(id);
+        } catch (PartInitException e) {
+            MessageDialog.openError(getSite().getShell(), "Show view", e.getMessage());
+        }
+    }
+
+    // ------------------------------------------------------------------------------------------------ checks and markers
+
+    /** Runs the validation rules on the model as it is now and shows the findings as Problems markers. */
+    private void validate() {
+        List<ValidationProblem> problems = new ModelValidation().validate(model.root());
+        markers.replace(markers.findings(problems));
+    }
+
+    /** The markers of this editor's file. */
+    public ProblemMarkers problemMarkers() {
+        return markers;
+    }
+
+    @Override
+    public void gotoMarker(IMarker marker) {
+        ProblemMarkers.elementOf(marker)
+                .map(uri -> domain.getResourceSet().getEObject(uri, false))
+                .ifPresent(this::reveal);
+    }
+
+    @Override
+    public <T> T getAdapter(Class<T> adapter) {
+        if (adapter == IPropertySheetPage.class) {
+            PropertySheetPage page = new PropertySheetPage();
+            page.setPropertySourceProvider(new ElementPropertySource.Provider(adapterFactory, entry));
+            return adapter.cast(page);
+        }
+        if (adapter == IGotoMarker.class) {
+            return adapter.cast(this);
+        }
+        return super.getAdapter(adapter);
+    }
+
+    private void unitsChanged() {
+        if (pages.isEmpty() || getContainer() == null || getContainer().isDisposed()) {
+            return;
+        }
+        TracewellPreferences.applyDisplayUnits();
+        for (ModelPage page : pages) {
+            page.tree().refresh(true);
+            page.form().show(page.form().element()); // units and hints of every row
+        }
+    }
+
+    // ------------------------------------------------------------------------------------------------ files on disk
+
+    /** How the editor asks about files changed on disk; dialogs unless replaced (tests answer without a dialog). */
+    public interface DiskPrompt {
+
+        /** What the user chose. */
+        enum Answer {
+            RELOAD, KEEP, OVERWRITE, CANCEL
+        }
+
+        /** The file(s) changed on disk: reload them ({@code dirty}: and lose the unsaved changes) or keep editing. */
+        Answer changedOnDisk(Shell shell, List<Path> files, boolean dirty);
+
+        /** The file(s) were deleted on disk; saving writes them again. */
+        void deletedOnDisk(Shell shell, List<Path> files);
+
+        /** Saving would overwrite a change made on disk since it was read: overwrite, or cancel the save. */
+        Answer saveOverChange(Shell shell, List<Path> files);
+
+        DiskPrompt DIALOGS = new DiskPrompt() {
+            @Override
+            public Answer changedOnDisk(Shell shell, List<Path> files, boolean dirty) {
+                String which = names(files);
+                String message = dirty
+                        ? which + " changed on disk, and this editor has unsaved changes.\n\nReload the file from disk "
+                                + "(your unsaved changes are lost) or keep editing your version (saving will ask "
+                                + "before it overwrites the change on disk)?"
+                        : which + " changed on disk.\n\nReload it? Keeping this version means saving will ask before "
+                                + "it overwrites the change on disk.";
+                int choice = new MessageDialog(shell, "File changed on disk", null, message,
+                        dirty ? MessageDialog.WARNING : MessageDialog.QUESTION, 0,
+                        dirty ? "Reload and lose my changes" : "Reload", "Keep my version").open();
+                return choice == 0 ? Answer.RELOAD : Answer.KEEP;
+            }
+
+            @Override
+            public void deletedOnDisk(Shell shell, List<Path> files) {
+                MessageDialog.openWarning(shell, "File deleted on disk", names(files) + " no longer exists on disk. "
+                        + "The editor keeps the model; saving writes the file again.");
+            }
+
+            @Override
+            public Answer saveOverChange(Shell shell, List<Path> files) {
+                int choice = new MessageDialog(shell, "File changed on disk", null, names(files)
+                        + " changed on disk since it was read. Saving now replaces that change with your version "
+                        + "(the replaced file is kept as .bak).", MessageDialog.WARNING, 1, "Overwrite",
+                        "Cancel save").open();
+                return choice == 0 ? Answer.OVERWRITE : Answer.CANCEL;
+            }
+
+            private static String names(List<Path> files) {
+                return files.stream().map(Path::toString).collect(java.util.stream.Collectors.joining(", "));
+            }
+        };
+    }
+
+    /** Replaces the prompt (tests; an embedding that answers differently). */
+    public void setDiskPrompt(DiskPrompt prompt) {
+        diskPrompt = java.util.Objects.requireNonNull(prompt, "prompt");
+    }
+
+    /** The files of the model that are watched: the opened file and every library file it uses. */
+    private List<Path> modelFiles() {
+        List<Path> files = new ArrayList<>();
+        for (Resource resource : domain.getResourceSet().getResources()) {
+            URI uri = resource.getURI();
+            if (uri != null && uri.isFile()) {
+                files.add(Path.of(uri.toFileString()).toAbsolutePath().normalize());
+            }
+        }
+        return files;
+    }
+
+    private void scheduleDiskCheck() {
+        Display display = getSite().getShell().getDisplay();
+        display.timerExec(DISK_CHECK_INTERVAL_MS, () -> {
+            if (domain == null || getContainer() == null || getContainer().isDisposed()) {
+                return; // closed
+            }
+            if (getSite().getPage().getActiveEditor() == this && display.getActiveShell() == getSite().getShell()) {
+                checkDisk();
+            }
+            scheduleDiskCheck();
+        });
+    }
+
+    /**
+     * Looks at the disk and, when a file of the model changed, asks what to do (see {@link DiskWatch#decide}).
+     *
+     * @return the decision taken (for tests)
+     */
+    public DiskWatch.Decision checkDisk() {
+        if (askingAboutDisk || domain == null || getContainer() == null || getContainer().isDisposed()) {
+            return DiskWatch.Decision.NOTHING;
+        }
+        List<Path> changed = diskWatch.changedSinceSeen();
+        List<Path> deleted = diskWatch.deletedSinceSeen();
+        DiskWatch.Decision decision = DiskWatch.decide(changed, deleted, isDirty());
+        if (decision == DiskWatch.Decision.NOTHING) {
+            return decision;
+        }
+        askingAboutDisk = true;
+        try {
+            if (decision == DiskWatch.Decision.DELETED) {
+                diskPrompt.deletedOnDisk(getSite().getShell(), deleted);
+                diskWatch.acknowledge();
+            } else if (diskPrompt.changedOnDisk(getSite().getShell(), changed,
+                    decision == DiskWatch.Decision.CONFLICT) == DiskPrompt.Answer.RELOAD) {
+                reload();
+            } else {
+                diskWatch.acknowledge();
+            }
+        } finally {
+            askingAboutDisk = false;
+        }
+        return decision;
+    }
+
+    /**
+     * Reads the file again: closes this editor without saving and opens the file anew on the page and element shown
+     * now. Views follow the new editor as they follow any activation.
+     */
+    private void reload() {
+        IWorkbenchPage page = getSite().getPage();
+        Path file = model.file();
+        String pageTitle = getActivePage() >= 0 && getActivePage() < pages.size() ? pages.get(getActivePage()).title()
+                : AXES_PAGE;
+        URI selected = selectedElement(pages.get(Math.max(0, getActivePage()))) instanceof EObject e
+                && e.eResource() != null ? EcoreUtil.getURI(e) : null;
+        page.closeEditor(this, false);
+        try {
+            MachineEditor fresh = open(page, file);
+            for (int i = 0; i < fresh.pages.size(); i++) {
+                if (fresh.pages.get(i).title().equals(pageTitle)) {
+                    fresh.setActivePage(i);
+                }
+            }
+            if (selected != null && fresh.domain.getResourceSet().getEObject(selected, false) instanceof EObject again) {
+                fresh.reveal(again);
+            }
+        } catch (PartInitException e) {
+            MessageDialog.openError(page.getWorkbenchWindow().getShell(), "Reload", e.getMessage());
         }
     }
 
@@ -210,8 +556,18 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
 
     @Override
     public void doSave(IProgressMonitor monitor) {
+        List<Path> changedOnDisk = diskWatch.changedSinceBase();
+        if (DiskWatch.saveNeedsConfirmation(changedOnDisk)
+                && diskPrompt.saveOverChange(getSite().getShell(), changedOnDisk) != DiskPrompt.Answer.OVERWRITE) {
+            if (monitor != null) {
+                monitor.setCanceled(true);
+            }
+            return;
+        }
         try {
             files.saveModified(domain.getResourceSet());
+            // What is on disk is now this editor's version (also of files other programs had changed).
+            diskWatch.restamp(modelFiles());
             ((BasicCommandStack) domain.getCommandStack()).saveIsDone();
             firePropertyChange(PROP_DIRTY);
         } catch (IOException e) {
@@ -245,9 +601,20 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
 
     @Override
     public void dispose() {
+        TracewellPreferences.store().removePropertyChangeListener(unitsListener);
+        if (getSite() != null) {
+            getSite().getPage().removePartListener(activation);
+            if (!getSite().getShell().isDisposed()) {
+                getSite().getShell().removeListener(SWT.Activate, shellActivation);
+            }
+        }
+        if (markers != null) {
+            markers.clear();
+        }
         if (adapterFactory != null) {
             adapterFactory.dispose();
         }
+        domain = null;
         super.dispose();
     }
 
@@ -293,6 +660,11 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
 
     IAction undoAction() {
         return undo;
+    }
+
+    /** What Edit → Undo says now, e.g. "&Undo Add axis A". */
+    public String undoLabel() {
+        return undo.getText();
     }
 
     IAction redoAction() {

@@ -21,8 +21,13 @@ public final class TradeValueParser {
             .compile("\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*?)\\s*");
 
     /** What people type for units whose symbol has a character that is not on the keyboard. */
-    private static final Map<String, String> KEYBOARD_SPELLINGS = Map.of("um", "µm", "us", "µs", "°", "deg",
-            "N/um", "N/µm", "kg*m^2", "kg·m²", "kg*cm^2", "kg·cm²", "m/s^2", "m/s²", "m/s^3", "m/s³", "rpm", "rev/min");
+    private static final Map<String, String> KEYBOARD_SPELLINGS = Map.ofEntries(Map.entry("um", "µm"),
+            Map.entry("us", "µs"), Map.entry("°", "deg"), Map.entry("N/um", "N/µm"), Map.entry("kg*m^2", "kg·m²"),
+            Map.entry("kg*cm^2", "kg·cm²"), Map.entry("m/s^2", "m/s²"), Map.entry("m/s^3", "m/s³"),
+            Map.entry("rpm", "rev/min"), Map.entry("uin", "µin"), Map.entry("in/s^2", "in/s²"),
+            Map.entry("in/s^3", "in/s³"),
+            // The inch trade's shorthand: feed in "ipm", position gain in "ipm/mil".
+            Map.entry("ipm", "in/min"), Map.entry("ipm/mil", "(in/min)/mil"));
 
     private TradeValueParser() {
     }

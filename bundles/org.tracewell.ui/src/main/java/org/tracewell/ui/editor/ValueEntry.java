@@ -62,13 +62,28 @@ public final class ValueEntry {
      * @return the reason the entry was rejected (nothing was changed), or empty when it was applied or unchanged
      */
     public Optional<String> enter(EObject owner, EStructuralFeature feature, String text) {
+        return parsed(owner, feature, text, value -> set(owner, feature, value));
+    }
+
+    /**
+     * The reason {@link #enter} would reject {@code text}, or empty when it would accept it. Changes nothing; for
+     * editors that check as the user types (the Properties view).
+     */
+    public Optional<String> check(EObject owner, EStructuralFeature feature, String text) {
+        return parsed(owner, feature, text, value -> java.util.Objects.equals(owner.eGet(feature), value)
+                ? Optional.empty() : newProblem(owner, feature, value));
+    }
+
+    /** Reads the text, then goes on with the value; a text that cannot be read is the rejection itself. */
+    private static Optional<String> parsed(EObject owner, EStructuralFeature feature, String text,
+            java.util.function.Function<Object, Optional<String>> then) {
         Object value;
         try {
             value = parse(owner, feature, text);
         } catch (IllegalArgumentException rejected) {
             return Optional.of(rejected.getMessage());
         }
-        return set(owner, feature, value);
+        return then.apply(value);
     }
 
     /** Sets an already typed value (a choice from a list, a check box) through the same checks and command path. */
@@ -153,17 +168,24 @@ public final class ValueEntry {
             return Optional.empty();
         }
         Set<String> before = errorsOn(trial);
+        // A chosen element (an axis for an allocation) is set as its copy: the rules check it belongs to the machine.
         if (feature.isMany()) {
             @SuppressWarnings("unchecked")
             EList<Object> list = (EList<Object>) trial.eGet(feature);
             list.clear();
-            list.addAll((List<?>) value);
+            for (Object each : (List<?>) value) {
+                list.add(inTrial(copier, each));
+            }
         } else {
-            trial.eSet(feature, value);
+            trial.eSet(feature, inTrial(copier, value));
         }
         Set<String> after = errorsOn(trial);
         after.removeAll(before);
         return after.stream().findFirst();
+    }
+
+    private static Object inTrial(EcoreUtil.Copier copier, Object value) {
+        return value instanceof EObject original && copier.get(original) != null ? copier.get(original) : value;
     }
 
     private Set<String> errorsOn(EObject element) {

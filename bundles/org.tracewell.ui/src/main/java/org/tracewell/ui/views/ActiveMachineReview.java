@@ -1,14 +1,7 @@
 package org.tracewell.ui.views;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.time.Instant;
 import java.util.HashMap;
-import java.util.HexFormat;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
@@ -26,15 +19,11 @@ import org.eclipse.ui.IWorkbenchPartReference;
 import org.tracewell.core.analysis.AnalysisCancelledException;
 import org.tracewell.core.analysis.AnalysisMemo;
 import org.tracewell.core.analysis.CancellationFlag;
-import org.tracewell.core.analysis.MachineBudget;
-import org.tracewell.core.analysis.MachineBudgets;
 import org.tracewell.core.analysis.ProgressListener;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.model.Machine;
 import org.tracewell.requirements.DesignReview;
-import org.tracewell.requirements.ReviewProvenance;
 import org.tracewell.requirements.ReviewResults;
-import org.tracewell.ui.ProductInfo;
 import org.tracewell.ui.editor.MachineEditor;
 import org.tracewell.ui.editor.MachineEditorInput;
 
@@ -181,8 +170,8 @@ final class ActiveMachineReview {
                 }
                 Outcome outcome;
                 try {
-                    ReviewResults results = DesignReview.run(copy, provenance(file, dirty), ProgressListener.SILENT,
-                            cancel, MEMO);
+                    ReviewResults results = DesignReview.run(copy, WorkbenchProvenance.of(file, dirty),
+                            ProgressListener.SILENT, cancel, MEMO);
                     outcome = new Outcome(name, results, "", false);
                 } catch (AnalysisCancelledException superseded) {
                     return Status.CANCEL_STATUS;
@@ -209,31 +198,6 @@ final class ActiveMachineReview {
         latest = outcome;
         for (Consumer<Outcome> listener : listeners) {
             listener.accept(outcome);
-        }
-    }
-
-    /** The settings line up with those {@code tracewell analyze} states, so a view and a report read alike. */
-    private static ReviewProvenance provenance(Path file, boolean dirty) {
-        List<String> settings = List.of(
-                "combination: " + MachineBudgets.DEFAULT_METHOD.printable(),
-                "reserve held back from each contour requirement: "
-                        + Math.round(MachineBudget.RESERVE_FRACTION * 100) + " %",
-                "coverage factor of random lines: k = 2",
-                "contours simulated with each axis's linear closed loop at the contour's sample period",
-                dirty ? "reviewed with the editor's unsaved changes (the hash is that of the saved file)"
-                        : "reviewed as saved");
-        return new ReviewProvenance(ProductInfo.version(), file == null ? "" : file.getFileName().toString(),
-                sha256(file), Instant.now(), List.of(), settings);
-    }
-
-    private static String sha256(Path file) {
-        if (file == null) {
-            return "";
-        }
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(file)));
-        } catch (IOException | NoSuchAlgorithmException e) {
-            return ""; // the hash only documents the review; a file being rewritten must not stop it
         }
     }
 }

@@ -5,12 +5,14 @@ import java.util.List;
 import java.util.function.Consumer;
 
 import org.eclipse.jface.resource.JFaceResources;
+import org.eclipse.jface.util.IPropertyChangeListener;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
@@ -25,8 +27,10 @@ import org.tracewell.engine.budget.BudgetStatus;
 import org.tracewell.engine.budget.LineContribution;
 import org.tracewell.engine.budget.TargetComparison;
 import org.tracewell.engine.units.TradeUnits;
+import org.tracewell.model.units.UnitSystem;
 import org.tracewell.requirements.ReviewResults;
 import org.tracewell.ui.charts.ChartCanvas;
+import org.tracewell.ui.prefs.TracewellPreferences;
 
 /**
  * Error Budget: for a machine contour requirement of the active machine, its budget lines ranked by their part of
@@ -39,6 +43,9 @@ public final class ErrorBudgetView extends ViewPart {
 
     private static final String[] COLUMNS = {"Rank", "Source", "Axis", "Class", "Distribution", "Value (µm)",
         "Contribution (µm)", "Share (%)"};
+    /** Columns whose header names the length unit. */
+    private static final int VALUE_COLUMN = 5;
+    private static final int CONTRIBUTION_COLUMN = 6;
     private static final int[] WIDTHS = {50, 220, 60, 90, 110, 90, 120, 80};
 
     private Combo requirementChoice;
@@ -50,6 +57,11 @@ public final class ErrorBudgetView extends ViewPart {
     private ReviewResults shown;
     private final List<RequirementBudget> choices = new ArrayList<>();
     private final Consumer<ActiveMachineReview.Outcome> listener = this::show;
+    private final IPropertyChangeListener unitsListener = event -> {
+        if (TracewellPreferences.UNIT_SYSTEM.equals(event.getProperty())) {
+            Display.getDefault().asyncExec(this::showSelected);
+        }
+    };
 
     @Override
     public void createPartControl(Composite parent) {
@@ -79,6 +91,7 @@ public final class ErrorBudgetView extends ViewPart {
         sash.setWeights(55, 45);
 
         review = ActiveMachineReview.subscribe(getSite().getPage(), listener);
+        TracewellPreferences.store().addPropertyChangeListener(unitsListener);
     }
 
     private void show(ActiveMachineReview.Outcome outcome) {
@@ -134,6 +147,11 @@ public final class ErrorBudgetView extends ViewPart {
     }
 
     private void showSelected() {
+        if (table == null || table.isDisposed()) {
+            return;
+        }
+        table.getColumn(VALUE_COLUMN).setText("Value (" + lengthUnit() + ")");
+        table.getColumn(CONTRIBUTION_COLUMN).setText("Contribution (" + lengthUnit() + ")");
         int index = requirementChoice.getSelectionIndex();
         if (index < 0 || index >= choices.size()) {
             return;
@@ -171,14 +189,15 @@ public final class ErrorBudgetView extends ViewPart {
     static String totals(String requirementId, BudgetEvaluation evaluation) {
         String total = um(evaluation.total());
         if (evaluation.comparison().isEmpty()) {
-            return requirementId + ": total " + total + " µm (no target to compare with)";
+            return requirementId + ": total " + total + " " + lengthUnit() + " (no target to compare with)";
         }
         TargetComparison t = evaluation.comparison().get();
-        String reserve = t.reserveFraction() > 0 ? " (" + um(t.allowedTotal()) + " µm allowed after the "
+        String unit = " " + lengthUnit();
+        String reserve = t.reserveFraction() > 0 ? " (" + um(t.allowedTotal()) + unit + " allowed after the "
                 + TradeUnits.format(100 * t.reserveFraction(), 2) + " % reserve)" : "";
         String verdict = t.status() == BudgetStatus.MET ? "met" : "violated";
-        return requirementId + ": total " + total + " µm of " + um(t.target()) + " µm" + reserve + " — " + verdict
-                + ", margin " + um(t.margin()) + " µm";
+        return requirementId + ": total " + total + unit + " of " + um(t.target()) + unit + reserve + " — " + verdict
+                + ", margin " + um(t.margin()) + unit;
     }
 
     private static String[] row(LineContribution c) {
@@ -199,8 +218,13 @@ public final class ErrorBudgetView extends ViewPart {
         return line.name().isBlank() ? line.source().displayName() : line.name();
     }
 
+    /** Budget values in µm, or in µin when the workbench shows inches. */
     private static String um(double metres) {
-        return TradeUnits.format(TradeUnits.micrometres(metres), 3);
+        return TradeUnits.format(TradeUnits.micrometres(metres) * UnitSystem.active().perMetricUnit("µm"), 3);
+    }
+
+    private static String lengthUnit() {
+        return UnitSystem.active().shown("µm");
     }
 
     // ------------------------------------------------------------------------------------------------ for tests
@@ -235,6 +259,7 @@ public final class ErrorBudgetView extends ViewPart {
 
     @Override
     public void dispose() {
+        TracewellPreferences.store().removePropertyChangeListener(unitsListener);
         if (review != null) {
             review.unsubscribe(listener);
         }

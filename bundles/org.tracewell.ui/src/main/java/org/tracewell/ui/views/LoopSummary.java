@@ -13,6 +13,7 @@ import org.tracewell.engine.loop.SteadyState;
 import org.tracewell.engine.loop.SteadyStateErrors;
 import org.tracewell.engine.loop.StepMetrics;
 import org.tracewell.engine.units.TradeUnits;
+import org.tracewell.model.units.UnitSystem;
 
 /** The results table of the Loop Analysis view, in the units a machine builder reads. */
 final class LoopSummary {
@@ -25,8 +26,10 @@ final class LoopSummary {
         SteadyState ss = a.steadyState();
         rows.add(row("System type", Integer.toString(ss.systemType())));
         rows.add(row("Kp", format(ss.kp(), 4)));
+        UnitSystem units = UnitSystem.active();
         rows.add(row("Kv", format(ss.kv(), 4) + " 1/s" + (Double.isFinite(ss.kv()) && ss.kv() > 0
-                ? " = " + format(TradeUnits.kvToMPerMinPerMm(ss.kv()), 3) + " (m/min)/mm" : "")));
+                ? " = " + format(TradeUnits.kvToMPerMinPerMm(ss.kv()) * units.perMetricUnit("(m/min)/mm"), 3) + " "
+                        + units.shown("(m/min)/mm") : "")));
         rows.add(row("Ka", withUnit(ss.ka(), "1/s²")));
         rows.add(row("Closed loop", a.stable() ? "stable" : "UNSTABLE"));
         if (a.steadyStateErrors().isPresent()) {
@@ -36,7 +39,9 @@ final class LoopSummary {
             rows.add(row("Error, unit parabola", withUnit(e.unitParabola(), "s²")));
             rows.add(row("Parabola convention", SteadyStateErrors.PARABOLA_CONVENTION));
             double followingAt1 = e.ramp(TradeUnits.mPerSFromMPerMin(1.0));
-            rows.add(row("Following error at 1 m/min", format(TradeUnits.micrometres(followingAt1), 4) + " µm"));
+            // Inch display: at 1 m/min still (a round feed of the trade in either system), the error in µin.
+            rows.add(row("Following error at 1 m/min", format(TradeUnits.micrometres(followingAt1)
+                    * units.perMetricUnit("µm"), 4) + " " + units.shown("µm")));
         } else {
             rows.add(row("Steady-state errors", "none: closed loop not stable"));
         }

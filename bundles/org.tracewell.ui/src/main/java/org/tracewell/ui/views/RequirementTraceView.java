@@ -13,6 +13,7 @@ import org.eclipse.jface.action.Action;
 import org.eclipse.jface.action.IToolBarManager;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.jface.resource.JFaceResources;
+import org.eclipse.jface.util.IPropertyChangeListener;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.ITreeContentProvider;
@@ -23,6 +24,7 @@ import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
@@ -32,6 +34,7 @@ import org.tracewell.core.SafetyCaution;
 import org.tracewell.engine.units.TradeUnits;
 import org.tracewell.model.Machine;
 import org.tracewell.model.Requirement;
+import org.tracewell.model.units.UnitSystem;
 import org.tracewell.report.TraceMatrixExport;
 import org.tracewell.requirements.DisplayUnits;
 import org.tracewell.requirements.RequirementReport;
@@ -40,6 +43,7 @@ import org.tracewell.requirements.RequirementStatus;
 import org.tracewell.requirements.ReviewResults;
 import org.tracewell.requirements.Verification;
 import org.tracewell.ui.editor.MachineEditor;
+import org.tracewell.ui.prefs.TracewellPreferences;
 
 /**
  * Requirement Trace: each machine requirement, the axis allocations derived from it, and the computed results that
@@ -81,6 +85,15 @@ public final class RequirementTraceView extends ViewPart {
 
     private Label verdict;
     private TreeViewer viewer;
+    private final IPropertyChangeListener unitsListener = event -> {
+        if (TracewellPreferences.UNIT_SYSTEM.equals(event.getProperty())) {
+            Display.getDefault().asyncExec(() -> {
+                if (viewer != null && !viewer.getControl().isDisposed()) {
+                    viewer.refresh(true);
+                }
+            });
+        }
+    };
     private ActiveMachineReview review;
     private volatile RequirementReport shown;
     private volatile ReviewResults shownResults;
@@ -115,6 +128,7 @@ public final class RequirementTraceView extends ViewPart {
         toolBar.add(exportAction("Export Trace as HTML…", "html", TraceMatrixExport::html));
 
         review = ActiveMachineReview.subscribe(getSite().getPage(), listener);
+        TracewellPreferences.store().addPropertyChangeListener(unitsListener);
     }
 
     /** Writes the trace matrix of the review on screen; the file dialog asks before replacing a file. */
@@ -304,14 +318,17 @@ public final class RequirementTraceView extends ViewPart {
     /** The text of {@code column} for a tree element; pure, so the tests read what the tree shows. */
     static String cell(Object element, int column) {
         if (element instanceof RequirementResult r) {
-            String unit = DisplayUnits.shown(r.siUnit(), r.displayUnit());
+            String modelUnit = DisplayUnits.shown(r.siUnit(), r.displayUnit());
+            // Lengths follow the display units preference (µm → µin); the rest is shown as the model states it.
+            String unit = UnitSystem.active().shown(modelUnit);
+            double k = UnitSystem.active().perMetricUnit(modelUnit);
             return switch (column) {
                 case 0 -> r.id() + " — " + r.statement()
                         + r.allocatedAxisName().map(axis -> " [axis " + axis + "]").orElse("");
-                case 1 -> withUnit(r.displayValue(), unit);
-                case 2 -> ("atLeast".equals(r.bound()) ? "≥ " : "≤ ") + TradeUnits.format(r.displayLimit(), SIGNIFICANT)
-                        + " " + unit;
-                case 3 -> margin(r, unit);
+                case 1 -> withUnit(scaled(r.displayValue(), k), unit);
+                case 2 -> ("atLeast".equals(r.bound()) ? "≥ " : "≤ ")
+                        + TradeUnits.format(r.displayLimit() * k, SIGNIFICANT) + " " + unit;
+                case 3 -> margin(r, unit, k);
                 case 4 -> r.status().label();
                 case 5 -> r.governing().map(Verification::describe)
                         .orElse(r.notEvaluatedReason().orElse(r.childIds().isEmpty() ? "—" : "its allocations"));
@@ -323,10 +340,14 @@ public final class RequirementTraceView extends ViewPart {
             RequirementResult owner = row.owner();
             return switch (column) {
                 case 0 -> "verified by " + v.describe();
-                case 1 -> v.value().isPresent()
-                        ? withUnit(OptionalDouble.of(DisplayUnits.fromSi(v.value().getAsDouble(), owner.siUnit(),
-                                owner.displayUnit())), DisplayUnits.shown(owner.siUnit(), owner.displayUnit()))
-                        : "not computed";
+                case 1 -> {
+                    String modelUnit = DisplayUnits.shown(owner.siUnit(), owner.displayUnit());
+                    yield v.value().isPresent()
+                            ? withUnit(OptionalDouble.of(DisplayUnits.fromSi(v.value().getAsDouble(), owner.siUnit(),
+                                    owner.displayUnit()) * UnitSystem.active().perMetricUnit(modelUnit)),
+                                    UnitSystem.active().shown(modelUnit))
+                            : "not computed";
+                }
                 default -> "";
             };
         }
@@ -337,8 +358,12 @@ public final class RequirementTraceView extends ViewPart {
         return value.isPresent() ? TradeUnits.format(value.getAsDouble(), SIGNIFICANT) + " " + unit : "—";
     }
 
-    private static String margin(RequirementResult r, String unit) {
-        OptionalDouble margin = r.displayMargin();
+    private static OptionalDouble scaled(OptionalDouble value, double k) {
+        return value.isPresent() ? OptionalDouble.of(value.getAsDouble() * k) : value;
+    }
+
+    private static String margin(RequirementResult r, String unit, double k) {
+        OptionalDouble margin = scaled(r.displayMargin(), k);
         if (margin.isEmpty()) {
             return "—";
         }
@@ -394,6 +419,7 @@ public final class RequirementTraceView extends ViewPart {
 
     @Override
     public void dispose() {
+        TracewellPreferences.store().removePropertyChangeListener(unitsListener);
         if (review != null) {
             review.unsubscribe(listener);
         }

@@ -35,11 +35,14 @@ import org.tracewell.model.TransferFunctionController;
 import org.tracewell.model.TransferFunctionPlant;
 import org.tracewell.model.TwoMassDrive;
 import org.tracewell.model.units.UnitAnnotations;
+import org.tracewell.model.units.UnitSystem;
+import org.tracewell.model.units.UnitTable;
 
 /**
  * Labels of model elements in trade units, e.g. {@code "Y · ball screw 10 mm · Kv 3.0 (m/min)/mm"}. The model stores
  * SI; this is the single place item providers turn it into what a machine builder reads. Each unit comes from the
- * attribute's declaration in the metamodel, so a label cannot show a unit the model does not mean.
+ * attribute's declaration in the metamodel, so a label cannot show a unit the model does not mean; lengths follow the
+ * active {@link UnitSystem} (metric or inch).
  */
 public final class TradeLabels {
 
@@ -175,7 +178,7 @@ public final class TradeLabels {
             label.append(orUnnamed(r.getAllocatedAxis().getName())).append(' ');
         }
         label.append(what).append(bound)
-                .append(org.tracewell.model.units.UnitTable.format(r.getLimit(), r.getDisplayUnit()));
+                .append(UnitTable.format(r.getLimit(), UnitSystem.active().shown(r.getDisplayUnit())));
         return label.toString();
     }
 

@@ -36,6 +36,17 @@ class TradeLabelsTest {
         return y;
     }
 
+    /** The LM-3020's G ≤ 25 µm. */
+    private static Requirement circularDeviationLimit() {
+        Requirement g = F.createRequirement();
+        g.setId("lm3020-r1");
+        g.setKind(RequirementKind.CONTOUR_DEVIATION);
+        g.setMetric(ContourMetric.CIRCULAR_DEVIATION);
+        g.setLimit(25e-6);
+        g.setDisplayUnit("µm");
+        return g;
+    }
+
     @Test
     void axisLabelInTradeUnits() {
         assertEquals("Y · ball screw 10 mm · Kv 3.0 (m/min)/mm", TradeLabels.text(yAxis()));
@@ -74,13 +85,7 @@ class TradeLabelsTest {
         notch.setWidth(30.0);
         assertEquals("notch 110 Hz, width 30 Hz", TradeLabels.text(notch));
 
-        Requirement g = F.createRequirement();
-        g.setId("lm3020-r1");
-        g.setKind(RequirementKind.CONTOUR_DEVIATION);
-        g.setMetric(ContourMetric.CIRCULAR_DEVIATION);
-        g.setLimit(25e-6);
-        g.setDisplayUnit("µm");
-        assertEquals("lm3020-r1 · circular deviation G ≤ 25 µm", TradeLabels.text(g));
+        assertEquals("lm3020-r1 · circular deviation G ≤ 25 µm", TradeLabels.text(circularDeviationLimit()));
 
         BudgetLine line = F.createBudgetLine();
         line.setAxis(y);
@@ -93,5 +98,19 @@ class TradeLabelsTest {
         m.setName("LM-3020");
         m.getAxes().add(y);
         assertEquals("LM-3020 · 1 axis", TradeLabels.text(m));
+    }
+
+    @Test
+    void inchSystemShowsLengthsInInches() {
+        try {
+            org.tracewell.model.units.UnitSystem.activate(org.tracewell.model.units.UnitSystem.INCH);
+            // 10 mm lead = 0.3937 in (10 / 25.4, international inch); 50 1/s = 3.0 (in/min)/mil = 3.0 (m/min)/mm
+            // (common practice: both are 1000/60 1/s).
+            assertEquals("Y · ball screw 0.3937 in · Kv 3.0 (in/min)/mil", TradeLabels.text(yAxis()));
+            // 25 µm = 984.3 µin (25e-6 / 25.4e-9).
+            assertEquals("lm3020-r1 · circular deviation G ≤ 984.3 µin", TradeLabels.text(circularDeviationLimit()));
+        } finally {
+            org.tracewell.model.units.UnitSystem.activate(org.tracewell.model.units.UnitSystem.METRIC);
+        }
     }
 }

@@ -1,0 +1,2 @@
+/** Help → Getting Started. */
+package org.tracewell.ui.help;
