@@ -73,6 +73,7 @@ public final class MachineVariantModel implements VariantModel {
     private final String machineName;
     private final List<AttributePath> paths;
     private final List<Quantity> parameters;
+    private final List<String> parameterDisplayUnits;
     private final double[] nominal;
     private final List<StudyMetric> metrics;
     private final List<Quantity> metricQuantities;
@@ -110,14 +111,17 @@ public final class MachineVariantModel implements VariantModel {
         }
         this.paths = parameterPaths.stream().map(AttributePath::parse).toList();
         List<Quantity> p = new ArrayList<>();
+        List<String> displayUnits = new ArrayList<>();
         List<AttributeTarget> nominalTargets = new ArrayList<>();
         for (AttributePath path : paths) {
             AttributeTarget target = path.resolve(snapshot);
             nominalTargets.add(target);
+            displayUnits.add(target.displayUnit());
             p.add(new Quantity(target.path(), target.siUnit(), target.attribute().getName() + " of "
                     + EcoreUtil.getID(target.owner()) + ", shown in " + target.displayUnit()));
         }
         this.parameters = List.copyOf(p);
+        this.parameterDisplayUnits = List.copyOf(displayUnits);
         this.nominal = nominalTargets.stream().mapToDouble(AttributeTarget::get).toArray();
         this.metrics = List.copyOf(StudyMetrics.parseAll(metricNames, snapshot));
         if (metrics.isEmpty()) {
@@ -235,6 +239,11 @@ public final class MachineVariantModel implements VariantModel {
     /** The nominal value of every parameter, SI. */
     public double[] nominal() {
         return nominal.clone();
+    }
+
+    /** The trade unit each parameter is shown in, parameter order. */
+    public List<String> parameterDisplayUnits() {
+        return parameterDisplayUnits;
     }
 
     /** The metrics, model order. */

@@ -20,6 +20,7 @@ public final class StudyResult {
     private final StudyDefinition definition;
     private final String machineName;
     private final List<Quantity> parameters;
+    private final List<String> parameterDisplayUnits;
     private final List<StudyMetric> metrics;
     private final double[] nominalParameters;
     private final double[] nominalMetrics;
@@ -30,13 +31,15 @@ public final class StudyResult {
     private final int threads;
     private final double seconds;
 
-    StudyResult(StudyDefinition definition, String machineName, List<Quantity> parameters, List<StudyMetric> metrics,
+    StudyResult(StudyDefinition definition, String machineName, List<Quantity> parameters,
+            List<String> parameterDisplayUnits, List<StudyMetric> metrics,
             double[] nominalParameters, double[] nominalMetrics, Optional<MonteCarloResult> monteCarlo,
             Optional<SweepResult> sweep, List<RequirementYield> yields, Optional<SensitivityAnalysis> sensitivities,
             int threads, double seconds) {
         this.definition = definition;
         this.machineName = machineName;
         this.parameters = List.copyOf(parameters);
+        this.parameterDisplayUnits = List.copyOf(parameterDisplayUnits);
         this.metrics = List.copyOf(metrics);
         this.nominalParameters = nominalParameters.clone();
         this.nominalMetrics = nominalMetrics.clone();
@@ -59,6 +62,11 @@ public final class StudyResult {
     /** The varied attributes, parameter order (name = path, SI unit). */
     public List<Quantity> parameters() {
         return parameters;
+    }
+
+    /** The trade unit each parameter is shown in, parameter order. */
+    public List<String> parameterDisplayUnits() {
+        return parameterDisplayUnits;
     }
 
     public List<StudyMetric> metrics() {

@@ -71,7 +71,8 @@ public final class StudyRunner {
             }
         }
         int threads = control.pool() == null ? 1 : control.pool().getParallelism();
-        return new StudyResult(definition, model.machineName(), model.parameters(), model.studyMetrics(), nominal,
+        return new StudyResult(definition, model.machineName(), model.parameters(), model.parameterDisplayUnits(),
+                model.studyMetrics(), nominal,
                 nominalMetrics, monteCarlo, sweep, yields, sensitivities, threads, (System.nanoTime() - start) / 1e9);
     }
 
