@@ -111,9 +111,10 @@ public final class AttributePath {
             boolean last = i == segments.size() - 1;
             List<EStructuralFeature> features = features(at.eClass(), segment.name());
             if (features.isEmpty()) {
+                List<String> elements = references(at.eClass());
                 throw new AttributePathException(text, describe(at) + " has no feature '" + segment.name() + "'; "
-                        + (last ? "numeric attributes there: " + numericAttributes(at.eClass()) + "; " : "")
-                        + "elements there: " + references(at.eClass()));
+                        + "numeric attributes there: " + numericAttributes(at.eClass())
+                        + (elements.isEmpty() ? "" : "; elements there: " + elements));
             }
             EStructuralFeature feature = features.get(0);
             if (feature instanceof EAttribute attribute) {
