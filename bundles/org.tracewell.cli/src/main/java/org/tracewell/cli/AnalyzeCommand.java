@@ -17,6 +17,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.concurrent.ForkJoinPool;
 
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
@@ -42,7 +43,13 @@ import org.tracewell.core.io.ModelLoadException;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.engine.budget.LineContribution;
 import org.tracewell.engine.units.TradeUnits;
+import org.tracewell.core.variation.StudyDefinition;
+import org.tracewell.core.variation.StudyResult;
+import org.tracewell.core.variation.StudyRunner;
+import org.tracewell.engine.variation.RunControl;
 import org.tracewell.model.Machine;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.VariationStudy;
 import org.tracewell.requirements.DerivedRequirement;
 import org.tracewell.requirements.DesignReview;
 import org.tracewell.requirements.DisplayUnits;
@@ -59,14 +66,14 @@ import org.tracewell.requirements.Verification;
  */
 public final class AnalyzeCommand {
 
-    static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...]";
+    static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...] [--studies]";
     static final String DEFAULT_OUT = "tracewell-report";
     static final String EXAMPLE = Examples.LM_3020;
 
     private AnalyzeCommand() {
     }
 
-    private record Options(Path file, Path out, boolean json, List<String> contours) {
+    private record Options(Path file, Path out, boolean json, List<String> contours, boolean studies) {
     }
 
     public static int run(String[] args, PrintStream out, PrintStream err) {
@@ -126,14 +133,26 @@ public final class AnalyzeCommand {
             err.println("tracewell analyze: internal error: " + e);
             return ExitCode.INTERNAL_ERROR;
         }
+        ReportInput reportInput = ReportInput.of(review, machine);
+        if (options.studies() && !machine.getStudies().isEmpty()) {
+            try {
+                reportInput = reportInput.withStudyResults(runStudies(machine, options.out(), bytes, file, err));
+            } catch (IOException e) {
+                err.println(options.out() + ": error: cannot write the study results: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            } catch (IllegalArgumentException | MappingException e) {
+                err.println(file + ": error: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+        }
+        ReportInput finalInput = reportInput;
         try {
             Files.createDirectories(options.out());
             // The report (charts, mostly) is the slowest part: draw it while the JSON and CSV files are written.
             err.println("writing the design-review report");
-            ReportInput reportInput = ReportInput.of(review, machine);
             CompletableFuture<List<Path>> report = CompletableFuture.supplyAsync(() -> {
                 try {
-                    return ReportWriter.write(reportInput, options.out());
+                    return ReportWriter.write(finalInput, options.out());
                 } catch (IOException e) {
                     throw new UncheckedIOException(e);
                 }
@@ -169,17 +188,21 @@ public final class AnalyzeCommand {
         Path file = null;
         Path dir = Path.of(DEFAULT_OUT);
         boolean json = false;
+        boolean studies = false;
         List<String> contours = new ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
             switch (a) {
                 case "--help", "-h" -> {
                     out.println(USAGE);
+                    out.println("--studies also runs every tolerance study the model asks for (they can take minutes)"
+                            + " and puts them into the report and DIR/studies/.");
                     out.println("Exit codes: 0 all requirements met, 1 a requirement violated, 2 bad input,"
                             + " 3 internal error.");
                     return null;
                 }
                 case "--json" -> json = true;
+                case "--studies" -> studies = true;
                 case "--out" -> {
                     if (i + 1 >= args.length) {
                         throw new IllegalArgumentException("--out needs a directory");
@@ -207,7 +230,32 @@ public final class AnalyzeCommand {
                 }
             }
         }
-        return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours);
+        return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours, studies);
+    }
+
+    /** Every study the model asks for, on all cores, each written to DIR/studies/ as tracewell montecarlo/sweep do. */
+    private static List<StudyResult> runStudies(Machine machine, Path out, byte[] bytes, Path file, PrintStream err)
+            throws IOException, MappingException {
+        List<StudyResult> results = new ArrayList<>();
+        ForkJoinPool pool = new ForkJoinPool(Runtime.getRuntime().availableProcessors());
+        try {
+            for (VariationStudy study : machine.getStudies()) {
+                StudyDefinition definition = StudyDefinition.of(study);
+                err.println("study '" + definition.name() + "' (" + (definition.kind() == StudyKind.SWEEP ? "sweep"
+                        : definition.variantCount() + " variants") + ")");
+                StudyResult result = StudyRunner.run(machine, definition, new RunControl(pool, (done, total) -> {
+                    if (done == total) {
+                        err.println("study '" + definition.name() + "': " + done + "/" + total);
+                    }
+                }, null));
+                StudyFiles.write(result, out.resolve("studies"), new StudyFiles.Provenance(TracewellCommand.version(),
+                        file.toString(), sha256(bytes), Instant.now(), "analyze --studies"));
+                results.add(result);
+            }
+        } finally {
+            pool.shutdown();
+        }
+        return results;
     }
 
     /** The bundled examples (see {@link Examples#folder()}); a usage error when they cannot be found. */

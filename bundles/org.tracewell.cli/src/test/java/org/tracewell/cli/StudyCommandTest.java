@@ -16,6 +16,9 @@ import com.google.gson.JsonParser;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tracewell.core.Examples;
+import org.tracewell.core.io.LoadedModel;
+import org.tracewell.core.io.ModelFiles;
 import org.tracewell.core.SafetyCaution;
 
 class StudyCommandTest {
@@ -130,6 +133,28 @@ class StudyCommandTest {
         Run metric = command("sweep", "--metric", "contour[line 45° F10].G", "--out", tmp.toString());
         assertEquals(ExitCode.BAD_INPUT, metric.code());
         assertTrue(metric.err().contains("G is defined on full circles"), metric.err());
+    }
+
+    @Test
+    void analyzeRunsTheStudiesOnlyWhenAskedAndPutsThemInTheReport() throws Exception {
+        Path examples = Examples.copyTo(tmp.resolve("examples"));
+        Path machine = examples.resolve(Examples.LM_3020);
+        ModelFiles files = new ModelFiles();
+        LoadedModel model = files.load(machine);
+        model.machine().getStudies().get(0).setVariantCount(12); // a short run for the test
+        files.save(model.resource());
+        Run plain = command("analyze", machine.toString(), "--out", tmp.resolve("plain").toString());
+        assertEquals(ExitCode.OK, plain.code(), plain.err());
+        String page = Files.readString(tmp.resolve("plain/index.html"));
+        assertTrue(page.contains("Tolerance studies") && page.contains("Not run for this report"), "asked, not run");
+        assertTrue(!Files.exists(tmp.resolve("plain/studies")), "a plain analysis runs no study");
+        Run studies = command("analyze", machine.toString(), "--studies", "--out", tmp.resolve("full").toString());
+        assertEquals(ExitCode.OK, studies.code(), studies.err());
+        String full = Files.readString(tmp.resolve("full/index.html"));
+        assertTrue(full.contains("Yield against each requirement") && full.contains("Worst variants on"), "run");
+        assertTrue(full.contains("Every grid point"), "the sweep's table");
+        assertTrue(Files.exists(tmp.resolve("full/studies/XY_tolerances.json")));
+        assertTrue(Files.exists(tmp.resolve("full/studies/Kv_match-grid.csv")));
     }
 
     @Test
