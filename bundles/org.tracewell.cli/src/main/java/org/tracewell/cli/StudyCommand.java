@@ -19,6 +19,7 @@ import org.tracewell.core.io.ModelLoadException;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.core.variation.RequirementYield;
 import org.tracewell.core.variation.StudyDefinition;
+import org.tracewell.core.variation.StudyFigures;
 import org.tracewell.core.variation.StudyMetric;
 import org.tracewell.core.variation.StudyResult;
 import org.tracewell.core.variation.StudyRunner;
@@ -446,8 +447,8 @@ public final class StudyCommand {
                 MetricSummary s = r.summary(m);
                 String unit = metric.displayUnit();
                 out.printf(Locale.ROOT, "%-38s %-12s %12s %12s %12s %12s%n", metric.name(), unit,
-                        shown(r.nominalMetrics()[m], unit), shown(s.p05(), unit), shown(s.p50(), unit),
-                        shown(s.p95(), unit));
+                        StudyFigures.number(r.nominalMetrics()[m], unit), StudyFigures.number(s.p05(), unit), StudyFigures.number(s.p50(), unit),
+                        StudyFigures.number(s.p95(), unit));
             }
             for (RequirementYield y : r.yields()) {
                 out.printf(Locale.ROOT, "yield %-32s %6.1f %% ± %.1f %% (%d of %d variants meet %s %s)%n",
@@ -469,13 +470,5 @@ public final class StudyCommand {
         }
         out.println("Results: " + written.json() + ", " + written.data());
         out.println("Caution: " + SafetyCaution.SHORT);
-    }
-
-    private static String shown(double si, String unit) {
-        if (Double.isNaN(si)) {
-            return "—";
-        }
-        return UnitTable.find(unit).map(u -> UnitTable.formatNumber(u.fromSi(si), u.minFractionDigits()))
-                .orElse(UnitTable.formatNumber(si, 0));
     }
 }

@@ -148,11 +148,11 @@ final class StudySection {
             StudyMetric metric = r.metrics().get(m);
             MetricSummary s = r.summary(m);
             String unit = metric.displayUnit();
-            t.row(Cell.text(metric.name()), Cell.text(unit), Cell.number(number(r.nominalMetrics()[m], unit)),
-                    Cell.number(number(s.mean(), unit)), Cell.number(spreadNumber(s.standardDeviation(), unit)),
-                    Cell.number(number(s.p01(), unit)), Cell.number(number(s.p05(), unit)),
-                    Cell.number(number(s.p50(), unit)), Cell.number(number(s.p95(), unit)),
-                    Cell.number(number(s.p99(), unit)), Cell.number(number(s.max(), unit)),
+            t.row(Cell.text(metric.name()), Cell.text(unit), Cell.number(StudyFigures.number(r.nominalMetrics()[m], unit)),
+                    Cell.number(StudyFigures.number(s.mean(), unit)), Cell.number(spreadNumber(s.standardDeviation(), unit)),
+                    Cell.number(StudyFigures.number(s.p01(), unit)), Cell.number(StudyFigures.number(s.p05(), unit)),
+                    Cell.number(StudyFigures.number(s.p50(), unit)), Cell.number(StudyFigures.number(s.p95(), unit)),
+                    Cell.number(StudyFigures.number(s.p99(), unit)), Cell.number(StudyFigures.number(s.max(), unit)),
                     Cell.number(Integer.toString(s.invalidCount())));
         }
         t.end();
@@ -268,18 +268,10 @@ final class StudySection {
 
     // ------------------------------------------------------------------------------------------------ numbers
 
-    private static String number(double si, String unit) {
-        if (Double.isNaN(si)) {
-            return "—";
-        }
-        return UnitTable.find(unit).map(u -> UnitTable.formatNumber(u.fromSi(si), u.minFractionDigits()))
-                .orElse(UnitTable.formatNumber(si, 0));
-    }
-
     /** A spread (σ, half-width) in a linear display unit; SI when the unit is logarithmic. */
     private static String spreadNumber(double si, String unit) {
         boolean linear = UnitTable.find(unit).map(u -> !u.decibel()).orElse(false);
-        return linear ? number(si, unit) : UnitTable.formatNumber(si, 0) + " (ratio)";
+        return linear ? StudyFigures.number(si, unit) : UnitTable.formatNumber(si, 0) + " (ratio)";
     }
 
     private static String spreadText(double si, String unit) {

@@ -170,6 +170,15 @@ public final class StudyFigures {
         return unit.isEmpty() || "1".equals(unit) ? name : name + " (" + unit + ")";
     }
 
+    /** An SI value as a number in a display unit, without the unit; "—" when not computable. */
+    public static String number(double si, String unit) {
+        if (Double.isNaN(si)) {
+            return "—";
+        }
+        return UnitTable.find(unit).map(u -> UnitTable.formatNumber(u.fromSi(si), u.minFractionDigits()))
+                .orElse(UnitTable.formatNumber(si, 0));
+    }
+
     /** An SI value in a display unit (NaN stays NaN; an unknown unit leaves SI). */
     public static double display(double si, String unit) {
         if (Double.isNaN(si)) {

@@ -77,6 +77,14 @@ public final class StudyRunner {
     }
 
     /**
+     * A copy of the machine with its library axes, for a study to run on while the original stays editable: take it
+     * where the machine is edited (the UI thread), then run on it anywhere.
+     */
+    public static Machine snapshot(Machine machine) {
+        return MachineVariantModel.copy(machine);
+    }
+
+    /**
      * The machine's study called {@code nameOrId}.
      *
      * @throws IllegalArgumentException listing the machine's studies when there is none of that name
