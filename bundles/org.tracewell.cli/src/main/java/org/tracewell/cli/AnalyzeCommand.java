@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
@@ -37,9 +38,6 @@ import org.tracewell.core.analysis.FeedFollowingError;
 import org.tracewell.core.analysis.MachineBudget;
 import org.tracewell.core.analysis.MachineBudgets;
 import org.tracewell.core.analysis.RequirementBudget;
-import org.tracewell.core.io.LoadProblem;
-import org.tracewell.core.io.ModelFiles;
-import org.tracewell.core.io.ModelLoadException;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.engine.budget.LineContribution;
 import org.tracewell.engine.units.TradeUnits;
@@ -89,24 +87,12 @@ public final class AnalyzeCommand {
             return ExitCode.BAD_INPUT;
         }
         Path file = options.file();
-        Machine machine;
-        byte[] bytes;
-        try {
-            if (!Files.isRegularFile(file)) {
-                err.println(file + ": error: no such file; give a .machine file");
-                return ExitCode.BAD_INPUT;
-            }
-            bytes = Files.readAllBytes(file);
-            machine = new ModelFiles().loadMachine(file);
-        } catch (ModelLoadException e) {
-            for (LoadProblem problem : e.problems()) {
-                err.println(problem.position() + ": error: " + problem.message());
-            }
-            return ExitCode.BAD_INPUT;
-        } catch (IOException e) {
-            err.println(file + ": error: cannot read: " + e.getMessage());
+        Optional<MachineInput> input = MachineInput.load(file, err);
+        if (input.isEmpty()) {
             return ExitCode.BAD_INPUT;
         }
+        Machine machine = input.get().machine();
+        byte[] bytes = input.get().bytes();
         ReviewResults review;
         try {
             List<String> settings = List.of(

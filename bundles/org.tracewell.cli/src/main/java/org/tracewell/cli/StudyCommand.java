@@ -9,13 +9,11 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.ForkJoinPool;
 import java.util.concurrent.atomic.AtomicLong;
 
 import org.tracewell.core.SafetyCaution;
-import org.tracewell.core.io.LoadProblem;
-import org.tracewell.core.io.ModelFiles;
-import org.tracewell.core.io.ModelLoadException;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.core.variation.RequirementYield;
 import org.tracewell.core.variation.StudyDefinition;
@@ -94,24 +92,12 @@ public final class StudyCommand {
             return ExitCode.BAD_INPUT;
         }
         Path file = options.file();
-        Machine machine;
-        byte[] bytes;
-        try {
-            if (!Files.isRegularFile(file)) {
-                err.println(file + ": error: no such file; give a .machine file");
-                return ExitCode.BAD_INPUT;
-            }
-            bytes = Files.readAllBytes(file);
-            machine = new ModelFiles().loadMachine(file);
-        } catch (ModelLoadException e) {
-            for (LoadProblem problem : e.problems()) {
-                err.println(problem.position() + ": error: " + problem.message());
-            }
-            return ExitCode.BAD_INPUT;
-        } catch (IOException e) {
-            err.println(file + ": error: cannot read: " + e.getMessage());
+        Optional<MachineInput> input = MachineInput.load(file, err);
+        if (input.isEmpty()) {
             return ExitCode.BAD_INPUT;
         }
+        Machine machine = input.get().machine();
+        byte[] bytes = input.get().bytes();
         StudyDefinition definition;
         try {
             definition = definition(kind, options, machine);

@@ -162,8 +162,11 @@ public final class StudyMetrics {
                         .toList(), velocityLoop, MachineBudgets.hasBudget(r));
     }
 
-    /** The requirement's contours, else those of its nearest ancestor that names some (as the review has it). */
-    private static List<Contour> inheritedContours(Requirement r) {
+    /**
+     * The contours verifying a following-error requirement: its own, else those of its nearest ancestor that names
+     * some (the design review's rule).
+     */
+    public static List<Contour> inheritedContours(Requirement r) {
         for (Requirement at = r; at != null; at = at.getParent()) {
             if (!at.getContours().isEmpty()) {
                 return List.copyOf(at.getContours());
