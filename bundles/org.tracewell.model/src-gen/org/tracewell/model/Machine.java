@@ -23,6 +23,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracewell.model.Machine#getContours <em>Contours</em>}</li>
  *   <li>{@link org.tracewell.model.Machine#getRequirements <em>Requirements</em>}</li>
  *   <li>{@link org.tracewell.model.Machine#getBudgetLines <em>Budget Lines</em>}</li>
+ *   <li>{@link org.tracewell.model.Machine#getStudies <em>Studies</em>}</li>
  * </ul>
  *
  * @see org.tracewell.model.TracewellPackage#getMachine()
@@ -120,5 +121,20 @@ public interface Machine extends Named {
 	 * @generated
 	 */
 	EList<BudgetLine> getBudgetLines();
+
+	/**
+	 * Returns the value of the '<em><b>Studies</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracewell.model.VariationStudy}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Sweeps and Monte-Carlo tolerance studies the machine asks for; run on request, never by a plain analysis.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Studies</em>' containment reference list.
+	 * @see org.tracewell.model.TracewellPackage#getMachine_Studies()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<VariationStudy> getStudies();
 
 } // Machine

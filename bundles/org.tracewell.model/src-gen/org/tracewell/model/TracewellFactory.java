@@ -220,6 +220,24 @@ public interface TracewellFactory extends EFactory {
 	BudgetLine createBudgetLine();
 
 	/**
+	 * Returns a new object of class '<em>Variation Study</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Variation Study</em>'.
+	 * @generated
+	 */
+	VariationStudy createVariationStudy();
+
+	/**
+	 * Returns a new object of class '<em>Varied Parameter</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Varied Parameter</em>'.
+	 * @generated
+	 */
+	VariedParameter createVariedParameter();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

@@ -222,13 +222,22 @@ public interface TracewellPackage extends EPackage {
 	int MACHINE__BUDGET_LINES = NAMED_FEATURE_COUNT + 5;
 
 	/**
+	 * The feature id for the '<em><b>Studies</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MACHINE__STUDIES = NAMED_FEATURE_COUNT + 6;
+
+	/**
 	 * The number of structural features of the '<em>Machine</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int MACHINE_FEATURE_COUNT = NAMED_FEATURE_COUNT + 6;
+	int MACHINE_FEATURE_COUNT = NAMED_FEATURE_COUNT + 7;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.impl.AxisImpl <em>Axis</em>}' class.
@@ -2192,6 +2201,215 @@ public interface TracewellPackage extends EPackage {
 	int BUDGET_LINE_FEATURE_COUNT = IDENTIFIED_FEATURE_COUNT + 9;
 
 	/**
+	 * The meta object id for the '{@link org.tracewell.model.impl.VariationStudyImpl <em>Variation Study</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracewell.model.impl.VariationStudyImpl
+	 * @see org.tracewell.model.impl.TracewellPackageImpl#getVariationStudy()
+	 * @generated
+	 */
+	int VARIATION_STUDY = 29;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__ID = NAMED__ID;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__NAME = NAMED__NAME;
+
+	/**
+	 * The feature id for the '<em><b>Description</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__DESCRIPTION = NAMED__DESCRIPTION;
+
+	/**
+	 * The feature id for the '<em><b>Kind</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__KIND = NAMED_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Variant Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__VARIANT_COUNT = NAMED_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Seed</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__SEED = NAMED_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Worst Variant Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__WORST_VARIANT_COUNT = NAMED_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Metrics</b></em>' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__METRICS = NAMED_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Parameters</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY__PARAMETERS = NAMED_FEATURE_COUNT + 5;
+
+	/**
+	 * The number of structural features of the '<em>Variation Study</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIATION_STUDY_FEATURE_COUNT = NAMED_FEATURE_COUNT + 6;
+
+	/**
+	 * The meta object id for the '{@link org.tracewell.model.impl.VariedParameterImpl <em>Varied Parameter</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracewell.model.impl.VariedParameterImpl
+	 * @see org.tracewell.model.impl.TracewellPackageImpl#getVariedParameter()
+	 * @generated
+	 */
+	int VARIED_PARAMETER = 30;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__ID = IDENTIFIED__ID;
+
+	/**
+	 * The feature id for the '<em><b>Path</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__PATH = IDENTIFIED_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Shape</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__SHAPE = IDENTIFIED_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Sigma</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__SIGMA = IDENTIFIED_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Half Width</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__HALF_WIDTH = IDENTIFIED_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Minimum</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__MINIMUM = IDENTIFIED_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Maximum</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__MAXIMUM = IDENTIFIED_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>From</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__FROM = IDENTIFIED_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>To</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__TO = IDENTIFIED_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Steps</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER__STEPS = IDENTIFIED_FEATURE_COUNT + 8;
+
+	/**
+	 * The number of structural features of the '<em>Varied Parameter</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int VARIED_PARAMETER_FEATURE_COUNT = IDENTIFIED_FEATURE_COUNT + 9;
+
+	/**
 	 * The meta object id for the '{@link org.tracewell.model.AxisKind <em>Axis Kind</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2199,7 +2417,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getAxisKind()
 	 * @generated
 	 */
-	int AXIS_KIND = 29;
+	int AXIS_KIND = 31;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.ScrewMounting <em>Screw Mounting</em>}' enum.
@@ -2209,7 +2427,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getScrewMounting()
 	 * @generated
 	 */
-	int SCREW_MOUNTING = 30;
+	int SCREW_MOUNTING = 32;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.LowPassOrder <em>Low Pass Order</em>}' enum.
@@ -2219,7 +2437,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getLowPassOrder()
 	 * @generated
 	 */
-	int LOW_PASS_ORDER = 31;
+	int LOW_PASS_ORDER = 33;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.EncoderSide <em>Encoder Side</em>}' enum.
@@ -2229,7 +2447,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getEncoderSide()
 	 * @generated
 	 */
-	int ENCODER_SIDE = 32;
+	int ENCODER_SIDE = 34;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.Direction <em>Direction</em>}' enum.
@@ -2239,7 +2457,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getDirection()
 	 * @generated
 	 */
-	int DIRECTION = 33;
+	int DIRECTION = 35;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.CornerKind <em>Corner Kind</em>}' enum.
@@ -2249,7 +2467,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getCornerKind()
 	 * @generated
 	 */
-	int CORNER_KIND = 34;
+	int CORNER_KIND = 36;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.RequirementKind <em>Requirement Kind</em>}' enum.
@@ -2259,7 +2477,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getRequirementKind()
 	 * @generated
 	 */
-	int REQUIREMENT_KIND = 35;
+	int REQUIREMENT_KIND = 37;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.ContourMetric <em>Contour Metric</em>}' enum.
@@ -2269,7 +2487,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getContourMetric()
 	 * @generated
 	 */
-	int CONTOUR_METRIC = 36;
+	int CONTOUR_METRIC = 38;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.LimitBound <em>Limit Bound</em>}' enum.
@@ -2279,7 +2497,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getLimitBound()
 	 * @generated
 	 */
-	int LIMIT_BOUND = 37;
+	int LIMIT_BOUND = 39;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.BudgetSource <em>Budget Source</em>}' enum.
@@ -2289,7 +2507,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getBudgetSource()
 	 * @generated
 	 */
-	int BUDGET_SOURCE = 38;
+	int BUDGET_SOURCE = 40;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.ValueOrigin <em>Value Origin</em>}' enum.
@@ -2299,7 +2517,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getValueOrigin()
 	 * @generated
 	 */
-	int VALUE_ORIGIN = 39;
+	int VALUE_ORIGIN = 41;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.ErrorClass <em>Error Class</em>}' enum.
@@ -2309,7 +2527,7 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getErrorClass()
 	 * @generated
 	 */
-	int ERROR_CLASS = 40;
+	int ERROR_CLASS = 42;
 
 	/**
 	 * The meta object id for the '{@link org.tracewell.model.Distribution <em>Distribution</em>}' enum.
@@ -2319,7 +2537,28 @@ public interface TracewellPackage extends EPackage {
 	 * @see org.tracewell.model.impl.TracewellPackageImpl#getDistribution()
 	 * @generated
 	 */
-	int DISTRIBUTION = 41;
+	int DISTRIBUTION = 43;
+
+
+	/**
+	 * The meta object id for the '{@link org.tracewell.model.StudyKind <em>Study Kind</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracewell.model.StudyKind
+	 * @see org.tracewell.model.impl.TracewellPackageImpl#getStudyKind()
+	 * @generated
+	 */
+	int STUDY_KIND = 44;
+
+	/**
+	 * The meta object id for the '{@link org.tracewell.model.ToleranceShape <em>Tolerance Shape</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracewell.model.ToleranceShape
+	 * @see org.tracewell.model.impl.TracewellPackageImpl#getToleranceShape()
+	 * @generated
+	 */
+	int TOLERANCE_SHAPE = 45;
 
 
 	/**
@@ -2450,6 +2689,17 @@ public interface TracewellPackage extends EPackage {
 	 * @generated
 	 */
 	EReference getMachine_BudgetLines();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracewell.model.Machine#getStudies <em>Studies</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Studies</em>'.
+	 * @see org.tracewell.model.Machine#getStudies()
+	 * @see #getMachine()
+	 * @generated
+	 */
+	EReference getMachine_Studies();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracewell.model.Axis <em>Axis</em>}'.
@@ -3944,6 +4194,191 @@ public interface TracewellPackage extends EPackage {
 	EAttribute getBudgetLine_Evidence();
 
 	/**
+	 * Returns the meta object for class '{@link org.tracewell.model.VariationStudy <em>Variation Study</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Variation Study</em>'.
+	 * @see org.tracewell.model.VariationStudy
+	 * @generated
+	 */
+	EClass getVariationStudy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariationStudy#getKind <em>Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Kind</em>'.
+	 * @see org.tracewell.model.VariationStudy#getKind()
+	 * @see #getVariationStudy()
+	 * @generated
+	 */
+	EAttribute getVariationStudy_Kind();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariationStudy#getVariantCount <em>Variant Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Variant Count</em>'.
+	 * @see org.tracewell.model.VariationStudy#getVariantCount()
+	 * @see #getVariationStudy()
+	 * @generated
+	 */
+	EAttribute getVariationStudy_VariantCount();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariationStudy#getSeed <em>Seed</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Seed</em>'.
+	 * @see org.tracewell.model.VariationStudy#getSeed()
+	 * @see #getVariationStudy()
+	 * @generated
+	 */
+	EAttribute getVariationStudy_Seed();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariationStudy#getWorstVariantCount <em>Worst Variant Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Worst Variant Count</em>'.
+	 * @see org.tracewell.model.VariationStudy#getWorstVariantCount()
+	 * @see #getVariationStudy()
+	 * @generated
+	 */
+	EAttribute getVariationStudy_WorstVariantCount();
+
+	/**
+	 * Returns the meta object for the attribute list '{@link org.tracewell.model.VariationStudy#getMetrics <em>Metrics</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute list '<em>Metrics</em>'.
+	 * @see org.tracewell.model.VariationStudy#getMetrics()
+	 * @see #getVariationStudy()
+	 * @generated
+	 */
+	EAttribute getVariationStudy_Metrics();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracewell.model.VariationStudy#getParameters <em>Parameters</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Parameters</em>'.
+	 * @see org.tracewell.model.VariationStudy#getParameters()
+	 * @see #getVariationStudy()
+	 * @generated
+	 */
+	EReference getVariationStudy_Parameters();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracewell.model.VariedParameter <em>Varied Parameter</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Varied Parameter</em>'.
+	 * @see org.tracewell.model.VariedParameter
+	 * @generated
+	 */
+	EClass getVariedParameter();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getPath <em>Path</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Path</em>'.
+	 * @see org.tracewell.model.VariedParameter#getPath()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_Path();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getShape <em>Shape</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Shape</em>'.
+	 * @see org.tracewell.model.VariedParameter#getShape()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_Shape();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getSigma <em>Sigma</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Sigma</em>'.
+	 * @see org.tracewell.model.VariedParameter#getSigma()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_Sigma();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getHalfWidth <em>Half Width</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Half Width</em>'.
+	 * @see org.tracewell.model.VariedParameter#getHalfWidth()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_HalfWidth();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getMinimum <em>Minimum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Minimum</em>'.
+	 * @see org.tracewell.model.VariedParameter#getMinimum()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_Minimum();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getMaximum <em>Maximum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Maximum</em>'.
+	 * @see org.tracewell.model.VariedParameter#getMaximum()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_Maximum();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getFrom <em>From</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>From</em>'.
+	 * @see org.tracewell.model.VariedParameter#getFrom()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_From();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getTo <em>To</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>To</em>'.
+	 * @see org.tracewell.model.VariedParameter#getTo()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_To();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracewell.model.VariedParameter#getSteps <em>Steps</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Steps</em>'.
+	 * @see org.tracewell.model.VariedParameter#getSteps()
+	 * @see #getVariedParameter()
+	 * @generated
+	 */
+	EAttribute getVariedParameter_Steps();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracewell.model.AxisKind <em>Axis Kind</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -4074,6 +4509,26 @@ public interface TracewellPackage extends EPackage {
 	EEnum getDistribution();
 
 	/**
+	 * Returns the meta object for enum '{@link org.tracewell.model.StudyKind <em>Study Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Study Kind</em>'.
+	 * @see org.tracewell.model.StudyKind
+	 * @generated
+	 */
+	EEnum getStudyKind();
+
+	/**
+	 * Returns the meta object for enum '{@link org.tracewell.model.ToleranceShape <em>Tolerance Shape</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Tolerance Shape</em>'.
+	 * @see org.tracewell.model.ToleranceShape
+	 * @generated
+	 */
+	EEnum getToleranceShape();
+
+	/**
 	 * Returns the factory that creates the instances of the model.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -4196,6 +4651,14 @@ public interface TracewellPackage extends EPackage {
 		 * @generated
 		 */
 		EReference MACHINE__BUDGET_LINES = eINSTANCE.getMachine_BudgetLines();
+
+		/**
+		 * The meta object literal for the '<em><b>Studies</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference MACHINE__STUDIES = eINSTANCE.getMachine_Studies();
 
 		/**
 		 * The meta object literal for the '{@link org.tracewell.model.impl.AxisImpl <em>Axis</em>}' class.
@@ -5354,6 +5817,146 @@ public interface TracewellPackage extends EPackage {
 		EAttribute BUDGET_LINE__EVIDENCE = eINSTANCE.getBudgetLine_Evidence();
 
 		/**
+		 * The meta object literal for the '{@link org.tracewell.model.impl.VariationStudyImpl <em>Variation Study</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracewell.model.impl.VariationStudyImpl
+		 * @see org.tracewell.model.impl.TracewellPackageImpl#getVariationStudy()
+		 * @generated
+		 */
+		EClass VARIATION_STUDY = eINSTANCE.getVariationStudy();
+
+		/**
+		 * The meta object literal for the '<em><b>Kind</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIATION_STUDY__KIND = eINSTANCE.getVariationStudy_Kind();
+
+		/**
+		 * The meta object literal for the '<em><b>Variant Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIATION_STUDY__VARIANT_COUNT = eINSTANCE.getVariationStudy_VariantCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Seed</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIATION_STUDY__SEED = eINSTANCE.getVariationStudy_Seed();
+
+		/**
+		 * The meta object literal for the '<em><b>Worst Variant Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIATION_STUDY__WORST_VARIANT_COUNT = eINSTANCE.getVariationStudy_WorstVariantCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Metrics</b></em>' attribute list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIATION_STUDY__METRICS = eINSTANCE.getVariationStudy_Metrics();
+
+		/**
+		 * The meta object literal for the '<em><b>Parameters</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference VARIATION_STUDY__PARAMETERS = eINSTANCE.getVariationStudy_Parameters();
+
+		/**
+		 * The meta object literal for the '{@link org.tracewell.model.impl.VariedParameterImpl <em>Varied Parameter</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracewell.model.impl.VariedParameterImpl
+		 * @see org.tracewell.model.impl.TracewellPackageImpl#getVariedParameter()
+		 * @generated
+		 */
+		EClass VARIED_PARAMETER = eINSTANCE.getVariedParameter();
+
+		/**
+		 * The meta object literal for the '<em><b>Path</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__PATH = eINSTANCE.getVariedParameter_Path();
+
+		/**
+		 * The meta object literal for the '<em><b>Shape</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__SHAPE = eINSTANCE.getVariedParameter_Shape();
+
+		/**
+		 * The meta object literal for the '<em><b>Sigma</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__SIGMA = eINSTANCE.getVariedParameter_Sigma();
+
+		/**
+		 * The meta object literal for the '<em><b>Half Width</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__HALF_WIDTH = eINSTANCE.getVariedParameter_HalfWidth();
+
+		/**
+		 * The meta object literal for the '<em><b>Minimum</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__MINIMUM = eINSTANCE.getVariedParameter_Minimum();
+
+		/**
+		 * The meta object literal for the '<em><b>Maximum</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__MAXIMUM = eINSTANCE.getVariedParameter_Maximum();
+
+		/**
+		 * The meta object literal for the '<em><b>From</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__FROM = eINSTANCE.getVariedParameter_From();
+
+		/**
+		 * The meta object literal for the '<em><b>To</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__TO = eINSTANCE.getVariedParameter_To();
+
+		/**
+		 * The meta object literal for the '<em><b>Steps</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute VARIED_PARAMETER__STEPS = eINSTANCE.getVariedParameter_Steps();
+
+		/**
 		 * The meta object literal for the '{@link org.tracewell.model.AxisKind <em>Axis Kind</em>}' enum.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -5482,6 +6085,26 @@ public interface TracewellPackage extends EPackage {
 		 * @generated
 		 */
 		EEnum DISTRIBUTION = eINSTANCE.getDistribution();
+
+		/**
+		 * The meta object literal for the '{@link org.tracewell.model.StudyKind <em>Study Kind</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracewell.model.StudyKind
+		 * @see org.tracewell.model.impl.TracewellPackageImpl#getStudyKind()
+		 * @generated
+		 */
+		EEnum STUDY_KIND = eINSTANCE.getStudyKind();
+
+		/**
+		 * The meta object literal for the '{@link org.tracewell.model.ToleranceShape <em>Tolerance Shape</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracewell.model.ToleranceShape
+		 * @see org.tracewell.model.impl.TracewellPackageImpl#getToleranceShape()
+		 * @generated
+		 */
+		EEnum TOLERANCE_SHAPE = eINSTANCE.getToleranceShape();
 
 	}
 

@@ -116,6 +116,7 @@ public class MachineItemProvider extends NamedItemProvider {
 			childrenFeatures.add(TracewellPackage.Literals.MACHINE__CONTOURS);
 			childrenFeatures.add(TracewellPackage.Literals.MACHINE__REQUIREMENTS);
 			childrenFeatures.add(TracewellPackage.Literals.MACHINE__BUDGET_LINES);
+			childrenFeatures.add(TracewellPackage.Literals.MACHINE__STUDIES);
 		}
 		return childrenFeatures;
 	}
@@ -176,6 +177,7 @@ public class MachineItemProvider extends NamedItemProvider {
 			case TracewellPackage.MACHINE__CONTOURS:
 			case TracewellPackage.MACHINE__REQUIREMENTS:
 			case TracewellPackage.MACHINE__BUDGET_LINES:
+			case TracewellPackage.MACHINE__STUDIES:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
 		}
@@ -212,6 +214,11 @@ public class MachineItemProvider extends NamedItemProvider {
 			(createChildParameter
 				(TracewellPackage.Literals.MACHINE__BUDGET_LINES,
 				 TracewellFactory.eINSTANCE.createBudgetLine()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(TracewellPackage.Literals.MACHINE__STUDIES,
+				 TracewellFactory.eINSTANCE.createVariationStudy()));
 	}
 
 }

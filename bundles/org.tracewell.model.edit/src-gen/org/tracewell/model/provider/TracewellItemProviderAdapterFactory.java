@@ -578,6 +578,52 @@ public class TracewellItemProviderAdapterFactory extends TracewellAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracewell.model.VariationStudy} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected VariationStudyItemProvider variationStudyItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracewell.model.VariationStudy}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createVariationStudyAdapter() {
+		if (variationStudyItemProvider == null) {
+			variationStudyItemProvider = new VariationStudyItemProvider(this);
+		}
+
+		return variationStudyItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link org.tracewell.model.VariedParameter} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected VariedParameterItemProvider variedParameterItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracewell.model.VariedParameter}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createVariedParameterAdapter() {
+		if (variedParameterItemProvider == null) {
+			variedParameterItemProvider = new VariedParameterItemProvider(this);
+		}
+
+		return variedParameterItemProvider;
+	}
+
+	/**
 	 * This returns the root adapter factory that contains this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -704,6 +750,8 @@ public class TracewellItemProviderAdapterFactory extends TracewellAdapterFactory
 		if (cornerItemProvider != null) cornerItemProvider.dispose();
 		if (requirementItemProvider != null) requirementItemProvider.dispose();
 		if (budgetLineItemProvider != null) budgetLineItemProvider.dispose();
+		if (variationStudyItemProvider != null) variationStudyItemProvider.dispose();
+		if (variedParameterItemProvider != null) variedParameterItemProvider.dispose();
 	}
 
 }

@@ -24,6 +24,7 @@ import org.tracewell.model.Contour;
 import org.tracewell.model.Machine;
 import org.tracewell.model.Requirement;
 import org.tracewell.model.TracewellPackage;
+import org.tracewell.model.VariationStudy;
 
 /**
  * <!-- begin-user-doc -->
@@ -39,6 +40,7 @@ import org.tracewell.model.TracewellPackage;
  *   <li>{@link org.tracewell.model.impl.MachineImpl#getContours <em>Contours</em>}</li>
  *   <li>{@link org.tracewell.model.impl.MachineImpl#getRequirements <em>Requirements</em>}</li>
  *   <li>{@link org.tracewell.model.impl.MachineImpl#getBudgetLines <em>Budget Lines</em>}</li>
+ *   <li>{@link org.tracewell.model.impl.MachineImpl#getStudies <em>Studies</em>}</li>
  * </ul>
  *
  * @generated
@@ -113,6 +115,16 @@ public class MachineImpl extends NamedImpl implements Machine {
 	 * @ordered
 	 */
 	protected EList<BudgetLine> budgetLines;
+
+	/**
+	 * The cached value of the '{@link #getStudies() <em>Studies</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getStudies()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<VariationStudy> studies;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -227,6 +239,19 @@ public class MachineImpl extends NamedImpl implements Machine {
 	 * @generated
 	 */
 	@Override
+	public EList<VariationStudy> getStudies() {
+		if (studies == null) {
+			studies = new EObjectContainmentEList<VariationStudy>(VariationStudy.class, this, TracewellPackage.MACHINE__STUDIES);
+		}
+		return studies;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case TracewellPackage.MACHINE__AXES:
@@ -237,6 +262,8 @@ public class MachineImpl extends NamedImpl implements Machine {
 				return ((InternalEList<?>)getRequirements()).basicRemove(otherEnd, msgs);
 			case TracewellPackage.MACHINE__BUDGET_LINES:
 				return ((InternalEList<?>)getBudgetLines()).basicRemove(otherEnd, msgs);
+			case TracewellPackage.MACHINE__STUDIES:
+				return ((InternalEList<?>)getStudies()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -261,6 +288,8 @@ public class MachineImpl extends NamedImpl implements Machine {
 				return getRequirements();
 			case TracewellPackage.MACHINE__BUDGET_LINES:
 				return getBudgetLines();
+			case TracewellPackage.MACHINE__STUDIES:
+				return getStudies();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -297,6 +326,10 @@ public class MachineImpl extends NamedImpl implements Machine {
 				getBudgetLines().clear();
 				getBudgetLines().addAll((Collection<? extends BudgetLine>)newValue);
 				return;
+			case TracewellPackage.MACHINE__STUDIES:
+				getStudies().clear();
+				getStudies().addAll((Collection<? extends VariationStudy>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -327,6 +360,9 @@ public class MachineImpl extends NamedImpl implements Machine {
 			case TracewellPackage.MACHINE__BUDGET_LINES:
 				getBudgetLines().clear();
 				return;
+			case TracewellPackage.MACHINE__STUDIES:
+				getStudies().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -351,6 +387,8 @@ public class MachineImpl extends NamedImpl implements Machine {
 				return requirements != null && !requirements.isEmpty();
 			case TracewellPackage.MACHINE__BUDGET_LINES:
 				return budgetLines != null && !budgetLines.isEmpty();
+			case TracewellPackage.MACHINE__STUDIES:
+				return studies != null && !studies.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

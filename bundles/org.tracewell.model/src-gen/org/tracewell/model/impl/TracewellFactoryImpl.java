@@ -79,6 +79,8 @@ public class TracewellFactoryImpl extends EFactoryImpl implements TracewellFacto
 			case TracewellPackage.CORNER: return createCorner();
 			case TracewellPackage.REQUIREMENT: return createRequirement();
 			case TracewellPackage.BUDGET_LINE: return createBudgetLine();
+			case TracewellPackage.VARIATION_STUDY: return createVariationStudy();
+			case TracewellPackage.VARIED_PARAMETER: return createVariedParameter();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier"); //$NON-NLS-1$ //$NON-NLS-2$
 		}
@@ -118,6 +120,10 @@ public class TracewellFactoryImpl extends EFactoryImpl implements TracewellFacto
 				return createErrorClassFromString(eDataType, initialValue);
 			case TracewellPackage.DISTRIBUTION:
 				return createDistributionFromString(eDataType, initialValue);
+			case TracewellPackage.STUDY_KIND:
+				return createStudyKindFromString(eDataType, initialValue);
+			case TracewellPackage.TOLERANCE_SHAPE:
+				return createToleranceShapeFromString(eDataType, initialValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier"); //$NON-NLS-1$ //$NON-NLS-2$
 		}
@@ -157,6 +163,10 @@ public class TracewellFactoryImpl extends EFactoryImpl implements TracewellFacto
 				return convertErrorClassToString(eDataType, instanceValue);
 			case TracewellPackage.DISTRIBUTION:
 				return convertDistributionToString(eDataType, instanceValue);
+			case TracewellPackage.STUDY_KIND:
+				return convertStudyKindToString(eDataType, instanceValue);
+			case TracewellPackage.TOLERANCE_SHAPE:
+				return convertToleranceShapeToString(eDataType, instanceValue);
 			default:
 				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier"); //$NON-NLS-1$ //$NON-NLS-2$
 		}
@@ -402,6 +412,28 @@ public class TracewellFactoryImpl extends EFactoryImpl implements TracewellFacto
 	public BudgetLine createBudgetLine() {
 		BudgetLineImpl budgetLine = new BudgetLineImpl();
 		return budgetLine;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public VariationStudy createVariationStudy() {
+		VariationStudyImpl variationStudy = new VariationStudyImpl();
+		return variationStudy;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public VariedParameter createVariedParameter() {
+		VariedParameterImpl variedParameter = new VariedParameterImpl();
+		return variedParameter;
 	}
 
 	/**
@@ -661,6 +693,46 @@ public class TracewellFactoryImpl extends EFactoryImpl implements TracewellFacto
 	 * @generated
 	 */
 	public String convertDistributionToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public StudyKind createStudyKindFromString(EDataType eDataType, String initialValue) {
+		StudyKind result = StudyKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'"); //$NON-NLS-1$ //$NON-NLS-2$ //$NON-NLS-3$
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertStudyKindToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ToleranceShape createToleranceShapeFromString(EDataType eDataType, String initialValue) {
+		ToleranceShape result = ToleranceShape.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'"); //$NON-NLS-1$ //$NON-NLS-2$ //$NON-NLS-3$
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertToleranceShapeToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

@@ -48,12 +48,16 @@ import org.tracewell.model.RigidScrewDrive;
 import org.tracewell.model.RotaryTable;
 import org.tracewell.model.ScrewMounting;
 import org.tracewell.model.Segment;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.ToleranceShape;
 import org.tracewell.model.TracewellFactory;
 import org.tracewell.model.TracewellPackage;
 import org.tracewell.model.TransferFunctionController;
 import org.tracewell.model.TransferFunctionPlant;
 import org.tracewell.model.TwoMassDrive;
 import org.tracewell.model.ValueOrigin;
+import org.tracewell.model.VariationStudy;
+import org.tracewell.model.VariedParameter;
 
 /**
  * <!-- begin-user-doc -->
@@ -270,6 +274,20 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass variationStudyEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass variedParameterEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EEnum axisKindEEnum = null;
 
 	/**
@@ -355,6 +373,20 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 	 * @generated
 	 */
 	private EEnum distributionEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum studyKindEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum toleranceShapeEEnum = null;
 
 	/**
 	 * Creates an instance of the model <b>Package</b>, registered with
@@ -534,6 +566,16 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 	@Override
 	public EReference getMachine_BudgetLines() {
 		return (EReference)machineEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getMachine_Studies() {
+		return (EReference)machineEClass.getEStructuralFeatures().get(6);
 	}
 
 	/**
@@ -1922,6 +1964,176 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 	 * @generated
 	 */
 	@Override
+	public EClass getVariationStudy() {
+		return variationStudyEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariationStudy_Kind() {
+		return (EAttribute)variationStudyEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariationStudy_VariantCount() {
+		return (EAttribute)variationStudyEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariationStudy_Seed() {
+		return (EAttribute)variationStudyEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariationStudy_WorstVariantCount() {
+		return (EAttribute)variationStudyEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariationStudy_Metrics() {
+		return (EAttribute)variationStudyEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getVariationStudy_Parameters() {
+		return (EReference)variationStudyEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getVariedParameter() {
+		return variedParameterEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_Path() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_Shape() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_Sigma() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_HalfWidth() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_Minimum() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_Maximum() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_From() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_To() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getVariedParameter_Steps() {
+		return (EAttribute)variedParameterEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getAxisKind() {
 		return axisKindEEnum;
 	}
@@ -2052,6 +2264,26 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 	 * @generated
 	 */
 	@Override
+	public EEnum getStudyKind() {
+		return studyKindEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EEnum getToleranceShape() {
+		return toleranceShapeEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public TracewellFactory getTracewellFactory() {
 		return (TracewellFactory)getEFactoryInstance();
 	}
@@ -2089,6 +2321,7 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		createEReference(machineEClass, MACHINE__CONTOURS);
 		createEReference(machineEClass, MACHINE__REQUIREMENTS);
 		createEReference(machineEClass, MACHINE__BUDGET_LINES);
+		createEReference(machineEClass, MACHINE__STUDIES);
 
 		axisEClass = createEClass(AXIS);
 		createEAttribute(axisEClass, AXIS__KIND);
@@ -2254,6 +2487,25 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		createEAttribute(budgetLineEClass, BUDGET_LINE__SENSITIVITY);
 		createEAttribute(budgetLineEClass, BUDGET_LINE__EVIDENCE);
 
+		variationStudyEClass = createEClass(VARIATION_STUDY);
+		createEAttribute(variationStudyEClass, VARIATION_STUDY__KIND);
+		createEAttribute(variationStudyEClass, VARIATION_STUDY__VARIANT_COUNT);
+		createEAttribute(variationStudyEClass, VARIATION_STUDY__SEED);
+		createEAttribute(variationStudyEClass, VARIATION_STUDY__WORST_VARIANT_COUNT);
+		createEAttribute(variationStudyEClass, VARIATION_STUDY__METRICS);
+		createEReference(variationStudyEClass, VARIATION_STUDY__PARAMETERS);
+
+		variedParameterEClass = createEClass(VARIED_PARAMETER);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__PATH);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__SHAPE);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__SIGMA);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__HALF_WIDTH);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__MINIMUM);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__MAXIMUM);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__FROM);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__TO);
+		createEAttribute(variedParameterEClass, VARIED_PARAMETER__STEPS);
+
 		// Create enums
 		axisKindEEnum = createEEnum(AXIS_KIND);
 		screwMountingEEnum = createEEnum(SCREW_MOUNTING);
@@ -2268,6 +2520,8 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		valueOriginEEnum = createEEnum(VALUE_ORIGIN);
 		errorClassEEnum = createEEnum(ERROR_CLASS);
 		distributionEEnum = createEEnum(DISTRIBUTION);
+		studyKindEEnum = createEEnum(STUDY_KIND);
+		toleranceShapeEEnum = createEEnum(TOLERANCE_SHAPE);
 	}
 
 	/**
@@ -2326,6 +2580,8 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		cornerEClass.getESuperTypes().add(this.getSegment());
 		requirementEClass.getESuperTypes().add(this.getIdentified());
 		budgetLineEClass.getESuperTypes().add(this.getIdentified());
+		variationStudyEClass.getESuperTypes().add(this.getNamed());
+		variedParameterEClass.getESuperTypes().add(this.getIdentified());
 
 		// Initialize classes and features; add operations and parameters
 		initEClass(identifiedEClass, Identified.class, "Identified", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS); //$NON-NLS-1$
@@ -2342,6 +2598,7 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		initEReference(getMachine_Contours(), this.getContour(), null, "contours", null, 0, -1, Machine.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
 		initEReference(getMachine_Requirements(), this.getRequirement(), null, "requirements", null, 0, -1, Machine.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
 		initEReference(getMachine_BudgetLines(), this.getBudgetLine(), null, "budgetLines", null, 0, -1, Machine.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEReference(getMachine_Studies(), this.getVariationStudy(), null, "studies", null, 0, -1, Machine.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
 
 		initEClass(axisEClass, Axis.class, "Axis", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS); //$NON-NLS-1$
 		initEAttribute(getAxis_Kind(), this.getAxisKind(), "kind", null, 0, 1, Axis.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
@@ -2507,6 +2764,25 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		initEAttribute(getBudgetLine_Sensitivity(), ecorePackage.getEDouble(), "sensitivity", "1.0", 0, 1, BudgetLine.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$ //$NON-NLS-2$
 		initEAttribute(getBudgetLine_Evidence(), ecorePackage.getEString(), "evidence", null, 0, 1, BudgetLine.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
 
+		initEClass(variationStudyEClass, VariationStudy.class, "VariationStudy", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS); //$NON-NLS-1$
+		initEAttribute(getVariationStudy_Kind(), this.getStudyKind(), "kind", null, 0, 1, VariationStudy.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariationStudy_VariantCount(), ecorePackage.getEInt(), "variantCount", "1000", 0, 1, VariationStudy.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$ //$NON-NLS-2$
+		initEAttribute(getVariationStudy_Seed(), ecorePackage.getELong(), "seed", "1", 0, 1, VariationStudy.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$ //$NON-NLS-2$
+		initEAttribute(getVariationStudy_WorstVariantCount(), ecorePackage.getEInt(), "worstVariantCount", "5", 0, 1, VariationStudy.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$ //$NON-NLS-2$
+		initEAttribute(getVariationStudy_Metrics(), ecorePackage.getEString(), "metrics", null, 0, -1, VariationStudy.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEReference(getVariationStudy_Parameters(), this.getVariedParameter(), null, "parameters", null, 0, -1, VariationStudy.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+
+		initEClass(variedParameterEClass, VariedParameter.class, "VariedParameter", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_Path(), ecorePackage.getEString(), "path", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_Shape(), this.getToleranceShape(), "shape", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_Sigma(), ecorePackage.getEDouble(), "sigma", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_HalfWidth(), ecorePackage.getEDouble(), "halfWidth", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_Minimum(), ecorePackage.getEDouble(), "minimum", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_Maximum(), ecorePackage.getEDouble(), "maximum", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_From(), ecorePackage.getEDouble(), "from", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_To(), ecorePackage.getEDouble(), "to", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+		initEAttribute(getVariedParameter_Steps(), ecorePackage.getEInt(), "steps", null, 0, 1, VariedParameter.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED); //$NON-NLS-1$
+
 		// Initialize enums and add enum literals
 		initEEnum(axisKindEEnum, AxisKind.class, "AxisKind"); //$NON-NLS-1$
 		addEEnumLiteral(axisKindEEnum, AxisKind.LINEAR);
@@ -2575,6 +2851,15 @@ public class TracewellPackageImpl extends EPackageImpl implements TracewellPacka
 		addEEnumLiteral(distributionEEnum, Distribution.UNIFORM);
 		addEEnumLiteral(distributionEEnum, Distribution.USHAPED);
 		addEEnumLiteral(distributionEEnum, Distribution.QUANTISATION);
+
+		initEEnum(studyKindEEnum, StudyKind.class, "StudyKind"); //$NON-NLS-1$
+		addEEnumLiteral(studyKindEEnum, StudyKind.MONTE_CARLO);
+		addEEnumLiteral(studyKindEEnum, StudyKind.SWEEP);
+
+		initEEnum(toleranceShapeEEnum, ToleranceShape.class, "ToleranceShape"); //$NON-NLS-1$
+		addEEnumLiteral(toleranceShapeEEnum, ToleranceShape.NORMAL);
+		addEEnumLiteral(toleranceShapeEEnum, ToleranceShape.UNIFORM);
+		addEEnumLiteral(toleranceShapeEEnum, ToleranceShape.TRIANGULAR);
 
 		// Create resource
 		createResource(eNS_URI);

@@ -184,6 +184,14 @@ public class TracewellAdapterFactory extends AdapterFactoryImpl {
 				return createBudgetLineAdapter();
 			}
 			@Override
+			public Adapter caseVariationStudy(VariationStudy object) {
+				return createVariationStudyAdapter();
+			}
+			@Override
+			public Adapter caseVariedParameter(VariedParameter object) {
+				return createVariedParameterAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -606,6 +614,34 @@ public class TracewellAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createBudgetLineAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracewell.model.VariationStudy <em>Variation Study</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracewell.model.VariationStudy
+	 * @generated
+	 */
+	public Adapter createVariationStudyAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracewell.model.VariedParameter <em>Varied Parameter</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracewell.model.VariedParameter
+	 * @generated
+	 */
+	public Adapter createVariedParameterAdapter() {
 		return null;
 	}
 

@@ -294,6 +294,21 @@ public class TracewellSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case TracewellPackage.VARIATION_STUDY: {
+				VariationStudy variationStudy = (VariationStudy)theEObject;
+				T result = caseVariationStudy(variationStudy);
+				if (result == null) result = caseNamed(variationStudy);
+				if (result == null) result = caseIdentified(variationStudy);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
+			case TracewellPackage.VARIED_PARAMETER: {
+				VariedParameter variedParameter = (VariedParameter)theEObject;
+				T result = caseVariedParameter(variedParameter);
+				if (result == null) result = caseIdentified(variedParameter);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			default: return defaultCase(theEObject);
 		}
 	}
@@ -730,6 +745,36 @@ public class TracewellSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseBudgetLine(BudgetLine object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Variation Study</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Variation Study</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseVariationStudy(VariationStudy object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Varied Parameter</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Varied Parameter</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseVariedParameter(VariedParameter object) {
 		return null;
 	}
 

@@ -14,17 +14,19 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.concurrent.ForkJoinPool;
 
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
 import org.tracewell.core.Examples;
-import org.tracewell.report.ReportInput;
 import org.tracewell.charts.ChartExport;
+import org.tracewell.report.ReportInput;
 import org.tracewell.report.ReportWriter;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.core.analysis.AnalysisCancelledException;
@@ -38,13 +40,16 @@ import org.tracewell.core.analysis.FeedFollowingError;
 import org.tracewell.core.analysis.MachineBudget;
 import org.tracewell.core.analysis.MachineBudgets;
 import org.tracewell.core.analysis.RequirementBudget;
-import org.tracewell.core.io.LoadProblem;
-import org.tracewell.core.io.ModelFiles;
-import org.tracewell.core.io.ModelLoadException;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.engine.budget.LineContribution;
 import org.tracewell.engine.units.TradeUnits;
+import org.tracewell.core.variation.StudyDefinition;
+import org.tracewell.core.variation.StudyResult;
+import org.tracewell.core.variation.StudyRunner;
+import org.tracewell.engine.variation.RunControl;
 import org.tracewell.model.Machine;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.VariationStudy;
 import org.tracewell.requirements.DerivedRequirement;
 import org.tracewell.requirements.DesignReview;
 import org.tracewell.requirements.DisplayUnits;
@@ -54,15 +59,14 @@ import org.tracewell.requirements.ReviewResults;
 import org.tracewell.requirements.Verification;
 
 /**
- * {@code tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME…] [--author NAME]}: analyses a machine (the
- * bundled LM-3020 when no FILE is given), writes the report (naming its author when given), results.json and one CSV
- * per contour run into DIR (default ./tracewell-report/),
+ * {@code tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME…]}: analyses a machine (the bundled LM-3020
+ * when no FILE is given), writes results.json and one CSV per contour run into DIR (default ./tracewell-report/),
  * prints the requirement summary in trade units and the safety caution. Exit 0 all met, 1 any violated, 2 bad input,
  * 3 internal error. Progress goes to stderr.
  */
 public final class AnalyzeCommand {
 
-    static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...]"
+    static final String USAGE = "usage: tracewell analyze [FILE] [--out DIR] [--json] [--contour NAME...] [--studies]"
             + " [--author NAME]";
     static final String DEFAULT_OUT = "tracewell-report";
     static final String EXAMPLE = Examples.LM_3020;
@@ -70,7 +74,8 @@ public final class AnalyzeCommand {
     private AnalyzeCommand() {
     }
 
-    private record Options(Path file, Path out, boolean json, List<String> contours, String author) {
+    private record Options(Path file, Path out, boolean json, List<String> contours, boolean studies,
+            String author) {
     }
 
     public static int run(String[] args, PrintStream out, PrintStream err) {
@@ -85,7 +90,6 @@ public final class AnalyzeCommand {
             err.println(USAGE);
             return ExitCode.BAD_INPUT;
         }
-        Path file = options.file();
         // The model load and the analysis leave a core idle: load the chart machinery there meanwhile.
         Thread warmUp = new Thread(() -> {
             try {
@@ -96,24 +100,13 @@ public final class AnalyzeCommand {
         }, "chart warm-up");
         warmUp.setDaemon(true);
         warmUp.start();
-        Machine machine;
-        byte[] bytes;
-        try {
-            if (!Files.isRegularFile(file)) {
-                err.println(file + ": error: no such file; give a .machine file");
-                return ExitCode.BAD_INPUT;
-            }
-            bytes = Files.readAllBytes(file);
-            machine = new ModelFiles().loadMachine(file);
-        } catch (ModelLoadException e) {
-            for (LoadProblem problem : e.problems()) {
-                err.println(problem.position() + ": error: " + problem.message());
-            }
-            return ExitCode.BAD_INPUT;
-        } catch (IOException e) {
-            err.println(file + ": error: cannot read: " + e.getMessage());
+        Path file = options.file();
+        Optional<MachineInput> input = MachineInput.load(file, err);
+        if (input.isEmpty()) {
             return ExitCode.BAD_INPUT;
         }
+        Machine machine = input.get().machine();
+        byte[] bytes = input.get().bytes();
         ReviewResults review;
         try {
             List<String> settings = List.of(
@@ -140,14 +133,26 @@ public final class AnalyzeCommand {
             err.println("tracewell analyze: internal error: " + e);
             return ExitCode.INTERNAL_ERROR;
         }
+        ReportInput reportInput = ReportInput.of(review, machine).withAuthor(options.author());
+        if (options.studies() && !machine.getStudies().isEmpty()) {
+            try {
+                reportInput = reportInput.withStudyResults(runStudies(machine, options.out(), bytes, file, err));
+            } catch (IOException e) {
+                err.println(options.out() + ": error: cannot write the study results: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            } catch (IllegalArgumentException | MappingException e) {
+                err.println(file + ": error: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+        }
+        ReportInput finalInput = reportInput;
         try {
             Files.createDirectories(options.out());
             // The report (charts, mostly) is the slowest part: draw it while the JSON and CSV files are written.
             err.println("writing the design-review report");
-            ReportInput reportInput = ReportInput.of(review, machine).withAuthor(options.author());
             CompletableFuture<List<Path>> report = CompletableFuture.supplyAsync(() -> {
                 try {
-                    return ReportWriter.write(reportInput, options.out());
+                    return ReportWriter.write(finalInput, options.out());
                 } catch (IOException e) {
                     throw new UncheckedIOException(e);
                 }
@@ -183,29 +188,33 @@ public final class AnalyzeCommand {
         Path file = null;
         Path dir = Path.of(DEFAULT_OUT);
         boolean json = false;
-        List<String> contours = new ArrayList<>();
+        boolean studies = false;
         String author = "";
+        List<String> contours = new ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
             switch (a) {
                 case "--help", "-h" -> {
                     out.println(USAGE);
+                    out.println("--studies also runs every tolerance study the model asks for (they can take minutes)"
+                            + " and puts them into the report and DIR/studies/.");
                     out.println("Exit codes: 0 all requirements met, 1 a requirement violated, 2 bad input,"
                             + " 3 internal error.");
                     return null;
                 }
                 case "--json" -> json = true;
-                case "--out" -> {
-                    if (i + 1 >= args.length) {
-                        throw new IllegalArgumentException("--out needs a directory");
-                    }
-                    dir = Path.of(args[++i]);
-                }
+                case "--studies" -> studies = true;
                 case "--author" -> {
                     if (i + 1 >= args.length || args[i + 1].isBlank() || args[i + 1].startsWith("--")) {
                         throw new IllegalArgumentException("--author needs a name, e.g. --author \"R. Okafor\"");
                     }
                     author = args[++i];
+                }
+                case "--out" -> {
+                    if (i + 1 >= args.length) {
+                        throw new IllegalArgumentException("--out needs a directory");
+                    }
+                    dir = Path.of(args[++i]);
                 }
                 case "--contour" -> {
                     int before = contours.size();
@@ -228,7 +237,33 @@ public final class AnalyzeCommand {
                 }
             }
         }
-        return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours, author);
+        return new Options(file == null ? examplesFolder().resolve(EXAMPLE) : file, dir, json, contours, studies,
+                author);
+    }
+
+    /** Every study the model asks for, on all cores, each written to DIR/studies/ as tracewell montecarlo/sweep do. */
+    private static List<StudyResult> runStudies(Machine machine, Path out, byte[] bytes, Path file, PrintStream err)
+            throws IOException, MappingException {
+        List<StudyResult> results = new ArrayList<>();
+        ForkJoinPool pool = new ForkJoinPool(Runtime.getRuntime().availableProcessors());
+        try {
+            for (VariationStudy study : machine.getStudies()) {
+                StudyDefinition definition = StudyDefinition.of(study);
+                err.println("study '" + definition.name() + "' (" + (definition.kind() == StudyKind.SWEEP ? "sweep"
+                        : definition.variantCount() + " variants") + ")");
+                StudyResult result = StudyRunner.run(machine, definition, new RunControl(pool, (done, total) -> {
+                    if (done == total) {
+                        err.println("study '" + definition.name() + "': " + done + "/" + total);
+                    }
+                }, null));
+                StudyFiles.write(result, out.resolve("studies"), new StudyFiles.Provenance(TracewellCommand.version(),
+                        file.toString(), sha256(bytes), Instant.now(), "analyze --studies"));
+                results.add(result);
+            }
+        } finally {
+            pool.shutdown();
+        }
+        return results;
     }
 
     /** The bundled examples (see {@link Examples#folder()}); a usage error when they cannot be found. */
@@ -435,7 +470,8 @@ public final class AnalyzeCommand {
                 row.addProperty("estimateUm", TradeUnits.micrometres(check.estimate()));
                 row.addProperty("formula", check.formula());
                 double relative = check.relativeDifference();
-                put(row, "relativeDifference", Double.isNaN(relative) ? OptionalDouble.empty() : OptionalDouble.of(relative));
+                put(row, "relativeDifference", Double.isNaN(relative) ? OptionalDouble.empty()
+                        : OptionalDouble.of(relative));
                 checks.add(row);
             }
             o.add("estimateChecks", checks);

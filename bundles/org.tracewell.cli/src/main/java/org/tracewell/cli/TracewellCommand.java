@@ -23,6 +23,10 @@ public final class TracewellCommand {
     TracewellCommand() {
         commands.put("analyze", new Entry("analyse a machine file and write the design-review report",
                 AnalyzeCommand::run));
+        commands.put("montecarlo", new Entry("seeded Monte-Carlo tolerance study: spreads, percentiles, yields",
+                StudyCommand::montecarlo));
+        commands.put("sweep", new Entry("1-D or 2-D parameter sweep of any numeric model attribute",
+                StudyCommand::sweep));
         commands.put("loop", new Entry("analyse one loop given as transfer-function coefficients", LoopCommand::run));
         commands.put("validate", new Entry("check a machine or axis file against the model rules", ValidateCommand::run));
         commands.put("diff", new Entry("semantic difference of two versions of a machine file", DiffCommand::run));

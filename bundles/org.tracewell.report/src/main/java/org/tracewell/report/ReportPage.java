@@ -75,6 +75,9 @@ final class ReportPage {
         {"caution", "Safety caution"},
     };
 
+    /** The studies section, after the budget, present only when the model asks for studies. */
+    static final String[] STUDIES_SECTION = {"studies", "Tolerance studies"};
+
     /** Tallest budget chart; very long budgets get thinner bars rather than a page-long image. */
     static final int MAX_BUDGET_HEIGHT_PX = 1400;
 
@@ -105,6 +108,9 @@ final class ReportPage {
         tracking();
         circles();
         budget();
+        if (!input.studies().isEmpty()) {
+            new StudySection(page, this::figure).render(input.studies());
+        }
         trace();
         assumptions();
         closingCaution();
@@ -145,6 +151,9 @@ final class ReportPage {
         page.open("nav", "contents").element("strong", "Contents").open("ol");
         for (String[] s : SECTIONS) {
             page.open("li").anchorLink(s[0], s[1]).close("li");
+            if (s[0].equals("budget") && !input.studies().isEmpty()) {
+                page.open("li").anchorLink(STUDIES_SECTION[0], STUDIES_SECTION[1]).close("li");
+            }
         }
         page.close("ol").close("nav");
         page.close("header");

@@ -220,14 +220,9 @@ public final class RequirementEvaluator {
         return List.copyOf(r.getContours());
     }
 
-    /** The requirement's contours, else those of its nearest ancestor that names some. */
+    /** The requirement's contours, else those of its nearest ancestor that names some (studies use the same rule). */
     private static List<Contour> inheritedContours(Requirement r) {
-        for (Requirement at = r; at != null; at = at.getParent()) {
-            if (!at.getContours().isEmpty()) {
-                return List.copyOf(at.getContours());
-            }
-        }
-        return List.of();
+        return org.tracewell.core.variation.StudyMetrics.inheritedContours(r);
     }
 
     static String siUnit(RequirementKind kind) {

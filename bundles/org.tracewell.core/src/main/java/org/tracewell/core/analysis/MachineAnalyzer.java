@@ -173,7 +173,7 @@ public final class MachineAnalyzer {
      * (v²/a + v·a/j, generous for an S-curve) and settle for {@link #OVERSHOOT_SETTLING_TIME}, at most a quarter
      * turn, so the evaluated 360° shows the steady circle and not the start from rest.
      */
-    private static Optional<CircleTestSetup> circleSetup(MappedContour contour) {
+    public static Optional<CircleTestSetup> circleSetup(MappedContour contour) {
         if (!isFullCircle(contour.path())) {
             return Optional.empty();
         }
@@ -222,11 +222,19 @@ public final class MachineAnalyzer {
 
     private static TrackingResult track(MappedContour contour, Path path, MappedAxis first, MappedAxis second,
             AxisLoop firstLoop, AxisLoop secondLoop) {
+        return TrackingSimulator.simulate(reference(contour, path, first, second), List.of(firstLoop, secondLoop));
+    }
+
+    /**
+     * The reference a run of {@code contour} follows along {@code path} (the contour's own path, or a circle-test
+     * path with overshoot arcs): feed planned within the path and both axes' limits (S-curve when the path jerk is
+     * limited), sampled at the contour's sample period.
+     */
+    public static Trajectory reference(MappedContour contour, Path path, MappedAxis first, MappedAxis second) {
         List<AxisLimits> axisLimits = List.of(first.limits(), second.limits());
         ProfileShape shape = Double.isFinite(contour.limits().jerk()) ? ProfileShape.S_CURVE : ProfileShape.TRAPEZOIDAL;
         FeedProfile profile = FeedPlanner.plan(path, contour.limits(), axisLimits, shape);
-        Trajectory reference = Trajectory.sample(path, profile, contour.samplePeriod());
-        return TrackingSimulator.simulate(reference, List.of(firstLoop, secondLoop));
+        return Trajectory.sample(path, profile, contour.samplePeriod());
     }
 
     private static ContourRunMetrics metrics(TrackingResult tracking, ContourErrorResult error,
@@ -276,10 +284,18 @@ public final class MachineAnalyzer {
     /** Closed-form values beside the simulation (DOMAIN.md §4), Kv of the analysed position loops. */
     private static ContourEstimate estimate(MappedContour contour, ContourRun programmed, double radius,
             AxisDynamics first, AxisDynamics second) {
-        double kx = first.positionGain();
-        double ky = second.positionGain();
+        return estimate(contour, programmed.trajectory(), radius, first.positionGain(), second.positionGain());
+    }
+
+    /**
+     * Closed-form values beside the simulation (DOMAIN.md §4) for position gains {@code kx}, {@code ky} (1/s).
+     *
+     * @param reference the planned reference of the programmed run
+     * @param radius    circle radius, m; 0 unless the contour is a full circle
+     */
+    public static ContourEstimate estimate(MappedContour contour, Trajectory reference, double radius, double kx,
+            double ky) {
         double feed = contour.limits().feed();
-        Trajectory reference = programmed.trajectory();
         double feFirst = ContourEstimates.followingError(reference.peakVelocity(0), kx);
         double feSecond = ContourEstimates.followingError(reference.peakVelocity(1), ky);
         OptionalDouble lossExact = OptionalDouble.empty();

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
+import java.util.function.Function;
 
 import org.tracewell.engine.budget.BudgetLine;
 import org.tracewell.engine.budget.BudgetTarget;
@@ -52,6 +53,18 @@ public final class MachineBudgets {
     }
 
     public static MachineBudget build(Machine machine, MachineAnalysis analysis) {
+        return build(machine, id -> analysis.contour(id).map(ContourFigures::of),
+                id -> analysis.axis(id).map(AxisFacts::of));
+    }
+
+    /**
+     * As {@link #build(Machine, MachineAnalysis)} from figures rather than a full analysis.
+     *
+     * @param contours the figures of a contour by model id; empty when it was not analysed
+     * @param axes     the facts of an axis by model id
+     */
+    public static MachineBudget build(Machine machine, Function<String, Optional<ContourFigures>> contours,
+            Function<String, Optional<AxisFacts>> axes) {
         List<BudgetLine> entered = new ArrayList<>();
         for (org.tracewell.model.BudgetLine line : machine.getBudgetLines()) {
             entered.add(entered(line));
@@ -60,78 +73,106 @@ public final class MachineBudgets {
         List<SupersededLine> superseded = new ArrayList<>();
         List<RequirementBudget> budgets = new ArrayList<>();
         for (Requirement requirement : machine.getRequirements()) {
-            if (requirement.getParent() != null || requirement.getKind() != RequirementKind.CONTOUR_DEVIATION
-                    || requirement.getBound() == LimitBound.AT_LEAST || !(requirement.getLimit() > 0)) {
+            Optional<Budgeted> budgeted = budget(machine, requirement, contours, axes);
+            if (budgeted.isEmpty()) {
                 continue;
             }
-            List<ContourResult> contours = requirement.getContours().stream().map(Contour::getId)
-                    .map(analysis::contour).flatMap(Optional::stream).toList();
-            if (contours.isEmpty()) {
-                continue;
-            }
-            Set<String> planeAxes = new LinkedHashSet<>();
-            for (ContourResult c : contours) {
-                planeAxes.add(c.firstAxisId());
-                planeAxes.add(c.secondAxisId());
-            }
-            List<BudgetLine> computed = computedLines(requirement, contours, planeAxes, analysis);
-            for (BudgetLine line : computed) {
+            for (BudgetLine line : budgeted.get().computed()) {
                 if (allComputed.stream().noneMatch(l -> l.id().equals(line.id()))) {
                     allComputed.add(line);
                 }
             }
-            List<BudgetLine> lines = new ArrayList<>(computed);
-            for (org.tracewell.model.BudgetLine modelLine : machine.getBudgetLines()) {
-                BudgetLine line = entered(modelLine);
-                if (!appliesToPlane(modelLine, planeAxes, analysis)) {
-                    continue;
+            for (SupersededLine line : budgeted.get().superseded()) {
+                if (superseded.stream().noneMatch(s -> s.stored().id().equals(line.stored().id()))) {
+                    superseded.add(line);
                 }
-                Optional<BudgetLine> replacement = modelLine.getOrigin() == org.tracewell.model.ValueOrigin.COMPUTED
-                        ? computed.stream().filter(c -> c.source() == line.source() && line.axis() != null
-                                && line.axis().equals(c.axis())).findFirst()
-                        : Optional.empty();
-                if (replacement.isPresent()) {
-                    if (superseded.stream().noneMatch(s -> s.stored().id().equals(line.id()))) {
-                        superseded.add(new SupersededLine(line, replacement.get().id()));
-                    }
-                    continue;
-                }
-                lines.add(line);
             }
-            ErrorBudget budget = ErrorBudget.of(requirement.getId(), DEFAULT_METHOD, lines);
-            budgets.add(new RequirementBudget(requirement.getId(), metricName(requirement.getMetric()),
-                    contours.stream().map(ContourResult::contourId).toList(), budget,
-                    budget.evaluate(new BudgetTarget(requirement.getLimit(), MachineBudget.RESERVE_FRACTION))));
+            budgets.add(budgeted.get().budget());
         }
         List<BudgetLine> keptEntered = entered.stream()
                 .filter(e -> superseded.stream().noneMatch(s -> s.stored().id().equals(e.id()))).toList();
         return new MachineBudget(allComputed, keptEntered, superseded, budgets);
     }
 
+    /**
+     * The budget of one requirement alone, as {@link #build} makes it: what a variant of a tolerance study needs,
+     * whose figures change from variant to variant. Empty for a requirement without a budget (not a machine-level
+     * contour-deviation limit, or none of its contours analysed).
+     */
+    public static Optional<RequirementBudget> forRequirement(Machine machine, Requirement requirement,
+            Function<String, Optional<ContourFigures>> contours, Function<String, Optional<AxisFacts>> axes) {
+        return budget(machine, requirement, contours, axes).map(Budgeted::budget);
+    }
+
+    /** True when {@link #build} gives the requirement a budget of its own (given its contours are analysed). */
+    public static boolean hasBudget(Requirement requirement) {
+        return requirement.getParent() == null && requirement.getKind() == RequirementKind.CONTOUR_DEVIATION
+                && requirement.getBound() != LimitBound.AT_LEAST && requirement.getLimit() > 0;
+    }
+
+    private record Budgeted(RequirementBudget budget, List<BudgetLine> computed, List<SupersededLine> superseded) {
+    }
+
+    private static Optional<Budgeted> budget(Machine machine, Requirement requirement,
+            Function<String, Optional<ContourFigures>> contourFigures, Function<String, Optional<AxisFacts>> axes) {
+        if (!hasBudget(requirement)) {
+            return Optional.empty();
+        }
+        List<ContourFigures> contours = requirement.getContours().stream().map(Contour::getId)
+                .map(contourFigures).flatMap(Optional::stream).toList();
+        if (contours.isEmpty()) {
+            return Optional.empty();
+        }
+        Set<String> planeAxes = new LinkedHashSet<>();
+        for (ContourFigures c : contours) {
+            planeAxes.add(c.firstAxisId());
+            planeAxes.add(c.secondAxisId());
+        }
+        List<BudgetLine> computed = computedLines(requirement, contours, planeAxes, axes);
+        List<BudgetLine> lines = new ArrayList<>(computed);
+        List<SupersededLine> superseded = new ArrayList<>();
+        for (org.tracewell.model.BudgetLine modelLine : machine.getBudgetLines()) {
+            BudgetLine line = entered(modelLine);
+            if (!appliesToPlane(modelLine, planeAxes, axes)) {
+                continue;
+            }
+            Optional<BudgetLine> replacement = modelLine.getOrigin() == org.tracewell.model.ValueOrigin.COMPUTED
+                    ? computed.stream().filter(c -> c.source() == line.source() && line.axis() != null
+                            && line.axis().equals(c.axis())).findFirst()
+                    : Optional.empty();
+            if (replacement.isPresent()) {
+                superseded.add(new SupersededLine(line, replacement.get().id()));
+                continue;
+            }
+            lines.add(line);
+        }
+        ErrorBudget budget = ErrorBudget.of(requirement.getId(), DEFAULT_METHOD, lines);
+        RequirementBudget result = new RequirementBudget(requirement.getId(), metricName(requirement.getMetric()),
+                contours.stream().map(ContourFigures::contourId).toList(), budget,
+                budget.evaluate(new BudgetTarget(requirement.getLimit(), MachineBudget.RESERVE_FRACTION)));
+        return Optional.of(new Budgeted(result, computed, superseded));
+    }
+
     /** The simulated figure of a contour-deviation metric on one run; empty when the metric needs a circle. */
     public static OptionalDouble metricValue(ContourMetric metric, ContourRun run) {
-        return switch (metric) {
-            case CIRCULAR_DEVIATION -> run.metrics().circularDeviationG();
-            case RADIAL_DEVIATION -> run.metrics().radialDeviationF();
-            default -> OptionalDouble.of(run.metrics().maxContourError());
-        };
+        return RunFigures.of(run).value(metric);
     }
 
     public static String metricName(ContourMetric metric) {
         return metric.getLiteral();
     }
 
-    private static List<BudgetLine> computedLines(Requirement requirement, List<ContourResult> contours,
-            Set<String> planeAxes, MachineAnalysis analysis) {
+    private static List<BudgetLine> computedLines(Requirement requirement, List<ContourFigures> contours,
+            Set<String> planeAxes, Function<String, Optional<AxisFacts>> axes) {
         List<BudgetLine> lines = new ArrayList<>();
         ContourMetric metric = requirement.getMetric();
         // The worst run over all the requirement's contours governs, as the requirement must hold on each.
-        ContourResult worstContour = null;
-        ContourRun worstRun = null;
+        ContourFigures worstContour = null;
+        RunFigures worstRun = null;
         double worst = -1;
-        for (ContourResult c : contours) {
-            for (ContourRun run : c.runs()) {
-                OptionalDouble v = metricValue(metric, run);
+        for (ContourFigures c : contours) {
+            for (RunFigures run : c.runs()) {
+                OptionalDouble v = run.value(metric);
                 if (v.isPresent() && v.getAsDouble() > worst) {
                     worst = v.getAsDouble();
                     worstContour = c;
@@ -162,7 +203,8 @@ public final class MachineBudgets {
                             + " DOMAIN.md §4); the planner's deceleration makes it an upper bound"));
         }
         for (String axisId : planeAxes) {
-            AxisResult axis = analysis.axis(axisId).orElseThrow();
+            AxisFacts axis = axes.apply(axisId).orElseThrow(() -> new IllegalArgumentException("axis " + axisId
+                    + " of the budget's contours was not analysed"));
             if (axis.positionResolution() > 0) {
                 lines.add(new BudgetLine(COMPUTED_PREFIX + axisId + ":quantisation", "encoder step", axis.axisName(),
                         SourceKind.QUANTISATION, axis.positionResolution(), ValueOrigin.COMPUTED, ErrorClass.RANDOM,
@@ -176,7 +218,7 @@ public final class MachineBudgets {
 
     /** An entered line counts for a plane when its axis (or its gantry partner) is one of the plane's, or it has none. */
     private static boolean appliesToPlane(org.tracewell.model.BudgetLine line, Set<String> planeAxes,
-            MachineAnalysis analysis) {
+            Function<String, Optional<AxisFacts>> axes) {
         Axis axis = line.getAxis();
         if (axis == null) {
             return true;
@@ -184,7 +226,7 @@ public final class MachineBudgets {
         if (planeAxes.contains(axis.getId())) {
             return true;
         }
-        return analysis.axis(axis.getId()).flatMap(AxisResult::gantryPartnerId).map(planeAxes::contains)
+        return axes.apply(axis.getId()).flatMap(AxisFacts::gantryPartnerId).map(planeAxes::contains)
                 .orElse(false);
     }
 

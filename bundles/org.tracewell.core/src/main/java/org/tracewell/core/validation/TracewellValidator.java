@@ -51,6 +51,14 @@ import org.tracewell.model.TracewellPackage.Literals;
 import org.tracewell.model.TransferFunctionController;
 import org.tracewell.model.TransferFunctionPlant;
 import org.tracewell.model.TwoMassDrive;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.ToleranceShape;
+import org.tracewell.model.VariationStudy;
+import org.tracewell.model.VariedParameter;
+import org.tracewell.model.paths.AttributePath;
+import org.tracewell.core.variation.StudyDefinition;
+import org.tracewell.core.variation.StudyMetrics;
+import org.tracewell.core.variation.SweepRange;
 import org.tracewell.model.units.TradeUnit;
 import org.tracewell.model.units.UnitTable;
 import org.tracewell.model.units.UnitAnnotations;
@@ -82,6 +90,7 @@ public class TracewellValidator extends EObjectValidator {
     public static final int TRANSFER_FUNCTION = 12;
     public static final int ID_SYNTAX = 13;
     public static final int REQUIREMENT_TREE = 14;
+    public static final int STUDY = 15;
 
     private static final Map<Integer, String> CODE_NAMES = Map.ofEntries(Map.entry(NOT_FINITE, "tw.finite"),
             Map.entry(NOT_POSITIVE, "tw.positive"), Map.entry(NEGATIVE, "tw.nonNegative"),
@@ -90,7 +99,7 @@ public class TracewellValidator extends EObjectValidator {
             Map.entry(AXIS_NOT_IN_MACHINE, "tw.axisNotInMachine"), Map.entry(SAMPLE_PERIOD, "tw.samplePeriod"),
             Map.entry(UNIT, "tw.unit"), Map.entry(GEOMETRY, "tw.geometry"),
             Map.entry(TRANSFER_FUNCTION, "tw.transferFunction"), Map.entry(ID_SYNTAX, "tw.id"),
-            Map.entry(REQUIREMENT_TREE, "tw.requirementTree"));
+            Map.entry(REQUIREMENT_TREE, "tw.requirementTree"), Map.entry(STUDY, "tw.study"));
 
     /**
      * A position loop needs its time constant 1/Kv to span many samples; Kv·T ≤ 0.1 keeps the phase loss of the
@@ -239,6 +248,8 @@ public class TracewellValidator extends EObjectValidator {
                 }
                 case Requirement r -> requirement(r);
                 case BudgetLine b -> budgetLine(b);
+                case VariationStudy v -> study(v);
+                case VariedParameter p -> variedParameter(p);
                 default -> {
                     // Segments without own rules (Line, Arc, FullCircle) are checked by their contour.
                 }
@@ -628,6 +639,109 @@ public class TracewellValidator extends EObjectValidator {
             }
             nonNegative(Literals.BUDGET_LINE__VALUE, "an error magnitude");
             range(Literals.BUDGET_LINE__SENSITIVITY, -1.0, true, 1.0, true, "the share seen normal to the path");
+        }
+
+        private void study(VariationStudy v) {
+            if (v.getName() == null || v.getName().isBlank()) {
+                error(MISSING, "has no name; expected a name to run it by (tracewell montecarlo --study NAME)",
+                        Literals.NAMED__NAME);
+            }
+            Machine machine = machineOf(v);
+            if (machine != null && v.getName() != null && !v.getName().isBlank()
+                    && machine.getStudies().stream().filter(o -> v.getName().equals(o.getName())).count() > 1) {
+                error(DUPLICATE_NAME, "two studies are named '" + v.getName() + "'; expected unique study names",
+                        Literals.NAMED__NAME);
+            }
+            int n = v.getParameters().size();
+            if (v.getKind() == StudyKind.SWEEP) {
+                if (n < 1 || n > 2) {
+                    error(STUDY, "is a sweep of " + n + " parameters; valid: 1 (a curve) or 2 (a family of curves)",
+                            Literals.VARIATION_STUDY__PARAMETERS);
+                }
+                long points = v.getParameters().stream().mapToLong(p -> Math.max(p.getSteps(), 1)).reduce(1,
+                        (a, b) -> a * b);
+                if (points > StudyDefinition.MAX_GRID_POINTS) {
+                    error(STUDY, "sweeps a grid of " + points + " points; valid: at most "
+                            + StudyDefinition.MAX_GRID_POINTS, Literals.VARIATION_STUDY__PARAMETERS);
+                }
+            } else {
+                if (n == 0) {
+                    error(MISSING, "varies nothing; expected at least one varied parameter",
+                            Literals.VARIATION_STUDY__PARAMETERS);
+                }
+                if (v.getVariantCount() < 1 || v.getVariantCount() > StudyDefinition.MAX_VARIANTS) {
+                    error(OUT_OF_RANGE, "variant count = " + v.getVariantCount() + "; valid range: 1 … "
+                            + StudyDefinition.MAX_VARIANTS, Literals.VARIATION_STUDY__VARIANT_COUNT);
+                }
+            }
+            if (v.getWorstVariantCount() < 0 || v.getWorstVariantCount() > StudyDefinition.MAX_WORST) {
+                error(OUT_OF_RANGE, "worst variant count = " + v.getWorstVariantCount() + "; valid range: 0 … "
+                        + StudyDefinition.MAX_WORST, Literals.VARIATION_STUDY__WORST_VARIANT_COUNT);
+            }
+            Set<String> paths = new HashSet<>();
+            for (VariedParameter p : v.getParameters()) {
+                if (p.getPath() != null && !paths.add(p.getPath().strip())) {
+                    error(STUDY, "varies " + p.getPath() + " twice; expected each attribute once",
+                            Literals.VARIATION_STUDY__PARAMETERS);
+                }
+            }
+            if (machine != null) {
+                for (String metric : v.getMetrics()) {
+                    try {
+                        StudyMetrics.parse(metric, machine);
+                    } catch (IllegalArgumentException bad) {
+                        error(STUDY, bad.getMessage(), Literals.VARIATION_STUDY__METRICS);
+                    }
+                }
+                if (v.getMetrics().isEmpty() && machine.getRequirements().isEmpty()) {
+                    error(MISSING, "names no metric and the machine has no requirement to collect; expected metrics"
+                            + " such as contour[NAME].G", Literals.VARIATION_STUDY__METRICS);
+                }
+            }
+        }
+
+        private void variedParameter(VariedParameter p) {
+            Machine machine = machineOf(p);
+            double nominal = Double.NaN;
+            if (p.getPath() == null || p.getPath().isBlank()) {
+                error(MISSING, "has no path; expected the attribute it varies, e.g. axis[X1].plant.loadMass",
+                        Literals.VARIED_PARAMETER__PATH);
+            } else if (machine != null) {
+                try {
+                    nominal = AttributePath.parse(p.getPath()).resolve(machine).get();
+                } catch (IllegalArgumentException bad) {
+                    error(STUDY, bad.getMessage(), Literals.VARIED_PARAMETER__PATH);
+                }
+            }
+            if (p.eContainer() instanceof VariationStudy v && v.getKind() == StudyKind.SWEEP) {
+                if (p.getSteps() < 2 || p.getSteps() > SweepRange.MAX_STEPS) {
+                    error(OUT_OF_RANGE, "steps = " + p.getSteps() + "; valid range: 2 … " + SweepRange.MAX_STEPS
+                            + " grid points", Literals.VARIED_PARAMETER__STEPS);
+                }
+                if (p.getFrom() == p.getTo()) {
+                    error(STUDY, "sweeps from " + p.getFrom() + " to " + p.getTo() + "; expected two different ends",
+                            Literals.VARIED_PARAMETER__TO);
+                }
+                return;
+            }
+            if (p.getShape() == ToleranceShape.NORMAL) {
+                positive(Literals.VARIED_PARAMETER__SIGMA, "a normal spread needs a standard deviation");
+            } else {
+                positive(Literals.VARIED_PARAMETER__HALF_WIDTH, "a " + p.getShape().getLiteral()
+                        + " spread needs a half-width");
+            }
+            if (p.isSetMinimum() && p.isSetMaximum() && !(p.getMinimum() < p.getMaximum())) {
+                error(OUT_OF_RANGE, "physical range [" + p.getMinimum() + ", " + p.getMaximum() + "] is empty;"
+                        + " valid: minimum < maximum", Literals.VARIED_PARAMETER__MAXIMUM);
+            }
+            if (Double.isFinite(nominal) && (p.isSetMinimum() && nominal < p.getMinimum()
+                    || p.isSetMaximum() && nominal > p.getMaximum())) {
+                error(OUT_OF_RANGE, "nominal value " + nominal + " of " + p.getPath() + " lies outside its physical"
+                        + " range [" + (p.isSetMinimum() ? p.getMinimum() : "−∞") + ", "
+                        + (p.isSetMaximum() ? p.getMaximum() : "∞") + "]; valid: a range holding the nominal",
+                        p.isSetMinimum() && nominal < p.getMinimum() ? Literals.VARIED_PARAMETER__MINIMUM
+                                : Literals.VARIED_PARAMETER__MAXIMUM);
+            }
         }
 
         // ---- helpers

@@ -25,6 +25,8 @@ import org.tracewell.model.TracewellFactory;
 import org.tracewell.model.TracewellPackage.Literals;
 import org.tracewell.model.TransferFunctionPlant;
 import org.tracewell.model.TwoMassDrive;
+import org.tracewell.model.VariationStudy;
+import org.tracewell.model.VariedParameter;
 
 /** Each rule fires on a one-change variant of the LM-3020 and says element, bad value and valid range. */
 class TracewellValidatorTest {
@@ -266,5 +268,47 @@ class TracewellValidatorTest {
     void idWithCharactersThatBreakReferences() {
         machine.getContours().get(0).setId("circle#1");
         expect("tw.id", "id 'circle#1' may contain only");
+    }
+
+    @Test
+    void studyWithABadPathOrMetricNamesWhatIsValid() {
+        VariationStudy study = machine.getStudies().get(0);
+        VariedParameter mass = study.getParameters().get(0);
+        mass.setPath("axis[X1].plant.mass");
+        expect("tw.study", "parameters (VariedParameter) [lm3020-study-tolerances-x1-mass]", "'axis[X1].plant.mass'",
+                "no feature 'mass'", "loadMass");
+        mass.setPath("axis[X1].plant.loadMass");
+        study.getMetrics().add("contour[line 45° F10].G");
+        expect("tw.study", "Variation study 'XY tolerances'", "G is defined on full circles", "maxContourError");
+    }
+
+    @Test
+    void toleranceNeedsItsWidthAndARangeHoldingTheNominal() {
+        VariationStudy study = machine.getStudies().get(0);
+        VariedParameter kv = study.getParameters().get(2);
+        kv.setSigma(0);
+        expect("tw.positive", "[lm3020-study-tolerances-x1-kv]", "sigma = 0", "standard deviation");
+        kv.setSigma(0.04);
+        kv.setMinimum(41);
+        expect("tw.range", "nominal value 40.0 of axis[X1].controller.positionGain", "[41.0, 42.0]");
+        kv.setMaximum(39);
+        expect("tw.range", "physical range [41.0, 39.0] is empty");
+        study.setVariantCount(200_000);
+        expect("tw.range", "variant count = 200000", "1 … 100000");
+    }
+
+    @Test
+    void sweepTakesOneOrTwoParametersWithTwoEndsAndSteps() {
+        VariationStudy sweep = machine.getStudies().get(1);
+        VariedParameter y = sweep.getParameters().get(0);
+        y.setSteps(1);
+        expect("tw.range", "[lm3020-study-kv-sweep-y]", "steps = 1", "2 … 1000");
+        y.setSteps(9);
+        y.setTo(y.getFrom());
+        expect("tw.study", "two different ends");
+        sweep.getParameters().add(EcoreUtil.copy(y));
+        sweep.getParameters().get(2).setId("extra");
+        expect("tw.study", "is a sweep of 3 parameters", "1 (a curve) or 2");
+        expect("tw.study", "varies axis[Y].controller.positionGain twice");
     }
 }

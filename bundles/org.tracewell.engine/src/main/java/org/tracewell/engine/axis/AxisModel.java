@@ -181,6 +181,17 @@ public record AxisModel(String name, AxisPlant plant, CascadeController controll
         return c.length == 0 ? Polynomial.ZERO : Polynomial.ofAscending(c);
     }
 
+    /**
+     * Type and constants of the load-position error E/R with the controller's feedforward (the effective type), as
+     * {@link #analyze()} reports them in {@link AxisDynamics#tracking()}.
+     *
+     * @param closedLoopStable whether the position closed loop is stable (errors are given only then)
+     */
+    public SteadyState trackingSteadyState(boolean closedLoopStable) {
+        return errorSteadyState(controller.velocityFeedforward(), controller.accelerationFeedforward(),
+                closedLoopStable);
+    }
+
     private SteadyState errorSteadyState(double vff, double aff, boolean stable) {
         Parts p = new Parts();
         Polynomial tracked = p.outputCommon.multiply(p.referenceNumerator(vff, aff));

@@ -166,7 +166,8 @@ public final class LoopAnalyzer {
         return Math.copySign(Double.POSITIVE_INFINITY, lead);
     }
 
-    static boolean allInOpenLeftHalfPlane(List<Complex> roots) {
+    /** The stability test of every analysis: each root strictly left of the imaginary axis (relative 1e-9). */
+    public static boolean allInOpenLeftHalfPlane(List<Complex> roots) {
         for (Complex p : roots) {
             if (p.abs() == 0 || !(p.getReal() < -1e-9 * p.abs())) {
                 return false;

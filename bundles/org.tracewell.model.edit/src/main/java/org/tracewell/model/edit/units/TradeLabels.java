@@ -34,6 +34,11 @@ import org.tracewell.model.TracewellPackage.Literals;
 import org.tracewell.model.TransferFunctionController;
 import org.tracewell.model.TransferFunctionPlant;
 import org.tracewell.model.TwoMassDrive;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.VariationStudy;
+import org.tracewell.model.VariedParameter;
+import org.tracewell.model.paths.AttributePath;
+import org.tracewell.model.paths.AttributeTarget;
 import org.tracewell.model.units.UnitAnnotations;
 import org.tracewell.model.units.UnitSystem;
 import org.tracewell.model.units.UnitTable;
@@ -89,6 +94,10 @@ public final class TradeLabels {
             return requirement(r);
         } else if (element instanceof BudgetLine b) {
             return budgetLine(b);
+        } else if (element instanceof VariationStudy v) {
+            return study(v);
+        } else if (element instanceof VariedParameter p) {
+            return variedParameter(p);
         } else if (element instanceof EObject e) {
             return e.eClass().getName();
         }
@@ -199,6 +208,57 @@ public final class TradeLabels {
         label.append(SEPARATOR).append(quantity(b, Literals.BUDGET_LINE__VALUE)).append(' ')
                 .append(b.getErrorClass().getLiteral());
         return label.toString();
+    }
+
+    private static String study(VariationStudy v) {
+        StringBuilder label = new StringBuilder(orUnnamed(v.getName())).append(SEPARATOR);
+        if (v.getKind() == StudyKind.SWEEP) {
+            label.append("sweep ").append(String.join(" × ", v.getParameters().stream()
+                    .map(p -> String.valueOf(p.getSteps())).toList())).append(" points");
+        } else {
+            label.append("Monte-Carlo ").append(v.getVariantCount()).append(" variants, seed ").append(v.getSeed());
+        }
+        int n = v.getParameters().size();
+        return label.append(SEPARATOR).append(n).append(n == 1 ? " parameter" : " parameters").toString();
+    }
+
+    /** The path, and the spread or grid in the trade unit of the attribute it leads to (SI when it leads nowhere). */
+    private static String variedParameter(VariedParameter p) {
+        String unit = "";
+        if (p.eContainer() != null && p.eContainer().eContainer() != null && p.getPath() != null) {
+            try {
+                AttributeTarget target = AttributePath.parse(p.getPath()).resolve(p.eContainer().eContainer());
+                unit = target.displayUnit();
+            } catch (IllegalArgumentException notFound) {
+                unit = "";
+            }
+        }
+        StringBuilder label = new StringBuilder(p.getPath() == null || p.getPath().isBlank() ? "(no path)" : p.getPath())
+                .append(SEPARATOR);
+        boolean sweep = p.eContainer() instanceof VariationStudy v && v.getKind() == StudyKind.SWEEP;
+        if (sweep) {
+            return label.append(shown(p.getFrom(), unit)).append(" to ").append(shown(p.getTo(), unit)).append(", ")
+                    .append(p.getSteps()).append(" points").toString();
+        }
+        switch (p.getShape()) {
+            case NORMAL -> label.append("normal σ ").append(shown(p.getSigma(), unit));
+            case UNIFORM -> label.append("uniform ± ").append(shown(p.getHalfWidth(), unit));
+            case TRIANGULAR -> label.append("triangular ± ").append(shown(p.getHalfWidth(), unit));
+        }
+        if (p.isSetMinimum() || p.isSetMaximum()) {
+            label.append(" in [").append(p.isSetMinimum() ? shown(p.getMinimum(), unit) : "−∞").append(", ")
+                    .append(p.isSetMaximum() ? shown(p.getMaximum(), unit) : "∞").append(']');
+        }
+        return label.toString();
+    }
+
+    /**
+     * An SI value (a spread or a grid end) in a display unit; a bare number when the unit is unknown or logarithmic
+     * (a spread of a ratio has no meaning in dB).
+     */
+    private static String shown(double si, String displayUnit) {
+        boolean linear = UnitTable.find(displayUnit).map(u -> !u.decibel()).orElse(false);
+        return linear ? UnitTable.format(si, displayUnit) : UnitTable.formatNumber(si, 0);
     }
 
     private static String point(EObject owner, EStructuralFeature x, EStructuralFeature y) {

@@ -15,7 +15,11 @@ import org.tracewell.model.NotchFilter;
 import org.tracewell.model.Requirement;
 import org.tracewell.model.RequirementKind;
 import org.tracewell.model.RigidScrewDrive;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.ToleranceShape;
 import org.tracewell.model.TracewellFactory;
+import org.tracewell.model.VariationStudy;
+import org.tracewell.model.VariedParameter;
 import org.tracewell.model.provider.TracewellItemProviderAdapterFactory;
 
 class TradeLabelsTest {
@@ -112,5 +116,38 @@ class TradeLabelsTest {
         } finally {
             org.tracewell.model.units.UnitSystem.activate(org.tracewell.model.units.UnitSystem.METRIC);
         }
+    }
+
+    @Test
+    void studiesAndVariedParametersShowTheSpreadInTheTargetsTradeUnit() {
+        Machine machine = F.createMachine();
+        machine.getAxes().add(yAxis());
+        VariationStudy study = F.createVariationStudy();
+        study.setName("Y tolerances");
+        study.setVariantCount(2000);
+        study.setSeed(3020);
+        VariedParameter kv = F.createVariedParameter();
+        kv.setPath("axis[Y].controller.positionGain");
+        kv.setSigma(0.5); // 0.5 1/s = 0.03 (m/min)/mm
+        VariedParameter mass = F.createVariedParameter();
+        mass.setPath("axis[Y].plant.loadMass");
+        mass.setShape(ToleranceShape.UNIFORM);
+        mass.setHalfWidth(25);
+        mass.setMinimum(150);
+        study.getParameters().add(kv);
+        study.getParameters().add(mass);
+        machine.getStudies().add(study);
+        assertEquals("Y tolerances · Monte-Carlo 2000 variants, seed 3020 · 2 parameters", TradeLabels.text(study));
+        assertEquals("axis[Y].controller.positionGain · normal σ 0.03 (m/min)/mm", TradeLabels.text(kv));
+        assertEquals("axis[Y].plant.loadMass · uniform ± 25 kg in [150 kg, ∞]", TradeLabels.text(mass));
+        study.setKind(StudyKind.SWEEP);
+        kv.setFrom(40);
+        kv.setTo(60);
+        kv.setSteps(11);
+        assertEquals("axis[Y].controller.positionGain · 2.4 (m/min)/mm to 3.6 (m/min)/mm, 11 points",
+                TradeLabels.text(kv));
+        // a path that leads nowhere still labels, with the bare SI number
+        kv.setPath("axis[Q].controller.positionGain");
+        assertEquals("axis[Q].controller.positionGain · 40 to 60, 11 points", TradeLabels.text(kv));
     }
 }
