@@ -90,7 +90,7 @@ class ReportWriterTest {
     @Test
     void hostileModelStringsAreEscapedAndThePageHasNoScript(@TempDir Path dir) throws Exception {
         ReportInput hostile = new ReportInput(ReportFixtures.hostileReview(lm3020), java.util.Optional.of(lm3020.inputs()),
-                ReportFixtures.HOSTILE + " description", ReportFixtures.HOSTILE + " author");
+                ReportFixtures.HOSTILE + " description", ReportFixtures.HOSTILE + " author", java.util.List.of());
         ReportWriter.write(hostile, dir);
         String html = html(dir);
         String lower = html.toLowerCase(Locale.ROOT);
