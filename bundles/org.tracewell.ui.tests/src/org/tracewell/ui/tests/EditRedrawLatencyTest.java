@@ -4,12 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.tracewell.ui.tests.LoopAnalysisViewTest.waitFor;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -49,6 +52,8 @@ class EditRedrawLatencyTest {
     private MachineEditor editor;
     /** Per contour view and edit: review, wait for a job, chart, on screen (ms). */
     private final Map<String, List<double[]>> stages = new LinkedHashMap<>();
+    /** Per edit: CPU time of every thread of the workbench from the edit until it was quiet again (ms). */
+    private final List<Double> cpuMs = new ArrayList<>();
 
     @AfterEach
     void closeEditor() {
@@ -103,6 +108,9 @@ class EditRedrawLatencyTest {
         }
         out.append(String.format(Locale.ROOT, "%-34s analysis median %s ms, charts median %s ms%n",
                 "Loop Analysis job:", fmt(median(analysisMs)), fmt(median(chartsMs))));
+        out.append(String.format(Locale.ROOT, "%-34s median %s ms of CPU (all threads, JIT and GC included), on %d"
+                + " cores shared with the load above%n", "work per edit:", fmt(median(cpuMs)),
+                Runtime.getRuntime().availableProcessors()));
         for (Map.Entry<String, List<double[]>> e : stages.entrySet()) {
             String[] parts = new String[4];
             for (int k = 0; k < 4; k++) {
@@ -130,6 +138,7 @@ class EditRedrawLatencyTest {
             double tradeKv = 2.30 + 0.01 * edit[0]++;
             double kv = tradeKv * 1000.0 / 60.0;
             List<ContourResult> before = watched.stream().map(w -> w.view().shownContour()).toList();
+            Map<Long, Long> cpuBefore = threadCpuNanos();
             long edited = System.nanoTime();
             Optional<String> rejected = editor.valueEntry().enter(y, Literals.CASCADE_CONTROLLER__POSITION_GAIN,
                     String.format(Locale.ROOT, "%.2f (m/min)/mm", tradeKv));
@@ -161,7 +170,32 @@ class EditRedrawLatencyTest {
                 chartsMs.add(job[1] / 1e6);
             }
             idle(200); // let the review views finish, so the next edit starts from a quiet workbench
+            if (i >= WARM_UP_EDITS) {
+                cpuMs.add(cpuSince(cpuBefore) / 1e6);
+            }
         }
+    }
+
+    /** CPU time so far of each live thread, by thread id. */
+    private static Map<Long, Long> threadCpuNanos() {
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        Map<Long, Long> cpu = new HashMap<>();
+        for (long id : threads.getAllThreadIds()) {
+            long t = threads.getThreadCpuTime(id);
+            if (t >= 0) {
+                cpu.put(id, t);
+            }
+        }
+        return cpu;
+    }
+
+    /** CPU time all live threads used since {@code before} (threads started since count in full). */
+    private static long cpuSince(Map<Long, Long> before) {
+        long sum = 0;
+        for (Map.Entry<Long, Long> now : threadCpuNanos().entrySet()) {
+            sum += now.getValue() - before.getOrDefault(now.getKey(), 0L);
+        }
+        return sum;
     }
 
     private static void idle(long ms) {
