@@ -44,7 +44,7 @@ public final class CircleTestView extends ContourView {
     }
 
     @Override
-    Drawing draw(ContourResult contour, int runIndex, Object options) {
+    Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx) {
         List<CircleRun> runs = new ArrayList<>();
         StringBuilder figures = new StringBuilder();
         for (ContourRun run : contour.runs()) {

@@ -70,7 +70,7 @@ public final class ContourDeviationView extends ContourView {
     }
 
     @Override
-    Drawing draw(ContourResult contour, int runIndex, Object options) {
+    Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx) {
         ContourRun run = contour.runs().get(runIndex);
         ContourDeviation data = ContourChartData.deviation(contour.contourName(), run.contourError(), DISPLAY_POINTS);
         double chosen = (Double) options;

@@ -126,8 +126,14 @@ public abstract class ContourView extends ViewPart {
         return null;
     }
 
-    /** Builds the chart and the figures of {@code contour} (run {@code runIndex} when the view chooses runs). Any thread. */
-    abstract Drawing draw(ContourResult contour, int runIndex, Object options);
+    /**
+     * Builds the chart and the figures of {@code contour} (run {@code runIndex} when the view chooses runs), for a
+     * chart {@code widthPx} wide (what a time series needs no more columns than). Any thread.
+     */
+    abstract Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx);
+
+    /** Width to build for when the chart is not drawn ahead (hidden now; drawn at whatever size it is shown). */
+    static final int DEFAULT_WIDTH_PX = 1600;
 
     // ------------------------------------------------------------------------------------------------ the view
 
@@ -241,7 +247,7 @@ public abstract class ContourView extends ViewPart {
         long requested = System.nanoTime();
         work.run(delayMs, getPartName() + ": " + contour.contourName(), () -> {
             long started = System.nanoTime();
-            Drawing drawing = draw(contour, runIndex, options);
+            Drawing drawing = draw(contour, runIndex, options, size == null ? DEFAULT_WIDTH_PX : size.x);
             return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size), started, System.nanoTime());
         }, result -> {
             Drawing drawing = result.drawing();
