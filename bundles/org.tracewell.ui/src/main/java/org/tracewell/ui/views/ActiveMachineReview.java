@@ -77,6 +77,12 @@ final class ActiveMachineReview {
     private final IWorkbenchPage page;
     private final Display display;
     private final ListenerList<Consumer<Outcome>> listeners = new ListenerList<>();
+    /** Told before {@link #listeners}: views that only hand the drawing to a job, so their jobs start first. */
+    private final ListenerList<Consumer<Outcome>> first = new ListenerList<>();
+    /** Stamps of the last published review: timer fired, job started, review done, published (nanoTime). */
+    private volatile long[] lastTimings = new long[4];
+    private volatile long scheduledAt;
+    private volatile long copiedAt;
     private final AtomicLong generation = new AtomicLong();
     private final CommandStackListener stackListener = event -> schedule(DEBOUNCE_MS);
     private final IPartListener2 partListener = new IPartListener2() {
@@ -109,8 +115,16 @@ final class ActiveMachineReview {
 
     /** Subscribes {@code listener} to the review of {@code page}'s active machine; it gets the latest at once. */
     static ActiveMachineReview subscribe(IWorkbenchPage page, Consumer<Outcome> listener) {
+        return subscribe(page, listener, false);
+    }
+
+    /**
+     * As {@link #subscribe(IWorkbenchPage, Consumer)}; a listener that only starts a job (and draws nothing on the UI
+     * thread) asks to be told {@code early}, so its job does not wait for the views that fill widgets.
+     */
+    static ActiveMachineReview subscribe(IWorkbenchPage page, Consumer<Outcome> listener, boolean early) {
         ActiveMachineReview review = BY_PAGE.computeIfAbsent(page, ActiveMachineReview::new);
-        review.listeners.add(listener);
+        (early ? review.first : review.listeners).add(listener);
         listener.accept(review.latest);
         return review;
     }
@@ -118,7 +132,8 @@ final class ActiveMachineReview {
     /** Ends the subscription; the last one stops following the editor. */
     void unsubscribe(Consumer<Outcome> listener) {
         listeners.remove(listener);
-        if (listeners.isEmpty()) {
+        first.remove(listener);
+        if (listeners.isEmpty() && first.isEmpty()) {
             follow(null);
             page.removePartListener(partListener);
             BY_PAGE.remove(page);
@@ -159,6 +174,7 @@ final class ActiveMachineReview {
         long mine = generation.incrementAndGet();
         running.cancel();
         display.timerExec(delayMs, () -> {
+            long fired = System.nanoTime();
             MachineEditor editor = followed;
             if (mine != generation.get() || editor == null) {
                 return;
@@ -174,11 +190,12 @@ final class ActiveMachineReview {
             boolean dirty = editor.isDirty();
             CancellationFlag cancel = CancellationFlag.create();
             running = cancel;
-            publish(new Outcome(name, latest.results(), latest.problem(), true));
+            copiedAt = System.nanoTime();
             Job job = Job.create("Design review: " + name, (IProgressMonitor monitor) -> {
                 if (mine != generation.get() || monitor.isCanceled()) {
                     return Status.CANCEL_STATUS;
                 }
+                long started = System.nanoTime();
                 Outcome outcome;
                 try {
                     ReviewResults results = DesignReview.run(copy, provenance(file, dirty), ProgressListener.SILENT,
@@ -192,8 +209,10 @@ final class ActiveMachineReview {
                     outcome = new Outcome(name, null, "Not reviewed: " + e.getMessage(), false);
                 }
                 Outcome result = outcome;
+                long reviewed = System.nanoTime();
                 display.asyncExec(() -> {
                     if (mine == generation.get()) {
+                        lastTimings = new long[] {fired, started, reviewed, System.nanoTime(), scheduledAt, copiedAt};
                         publish(result);
                     }
                 });
@@ -202,14 +221,25 @@ final class ActiveMachineReview {
             job.setSystem(true);
             job.setPriority(Job.INTERACTIVE);
             job.schedule();
+            scheduledAt = System.nanoTime();
+            // Told after the job is on its way, so the views' work on this thread does not hold the review back.
+            publish(new Outcome(name, latest.results(), latest.problem(), true));
         });
     }
 
     private void publish(Outcome outcome) {
         latest = outcome;
+        for (Consumer<Outcome> listener : first) {
+            listener.accept(outcome);
+        }
         for (Consumer<Outcome> listener : listeners) {
             listener.accept(outcome);
         }
+    }
+
+    /** {@link System#nanoTime()} stamps of the last published review: timer fired, job started, done, published. */
+    long[] lastTimings() {
+        return lastTimings.clone();
     }
 
     /** The settings line up with those {@code tracewell analyze} states, so a view and a report read alike. */

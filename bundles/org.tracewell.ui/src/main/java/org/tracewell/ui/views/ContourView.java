@@ -170,7 +170,7 @@ public abstract class ContourView extends ViewPart {
         if (current != null) {
             selectionChanged(getSite().getPage().getActivePart(), current);
         }
-        review = ActiveMachineReview.subscribe(getSite().getPage(), reviewListener);
+        review = ActiveMachineReview.subscribe(getSite().getPage(), reviewListener, true);
         // The view becomes visible after this method returns; draw then.
         parent.getDisplay().asyncExec(() -> redraw(0));
     }
@@ -253,8 +253,7 @@ public abstract class ContourView extends ViewPart {
             Drawing drawing = result.drawing();
             shown = new Shown(contour, runIndex, options, drawing);
             heading.setText(title);
-            summary.setText(drawing.summary());
-            summary.getParent().layout(true, true);
+            Labels.setKeepingLayout(summary, drawing.summary());
             canvas.show(result.pixels());
             canvas.update(); // paint now, so the time stamp is the finished redraw's
             lastRedrawNanos = System.nanoTime();
@@ -356,6 +355,14 @@ public abstract class ContourView extends ViewPart {
      */
     public long[] lastRedrawTimings() {
         return lastTimings.clone();
+    }
+
+    /**
+     * {@link System#nanoTime()} stamps of the last review the view was told of: its timer fired, its job started, it
+     * was done, it was published.
+     */
+    public long[] reviewTimings() {
+        return review == null ? new long[4] : review.lastTimings();
     }
 
     /** Called on the UI thread each time a chart has been drawn. */

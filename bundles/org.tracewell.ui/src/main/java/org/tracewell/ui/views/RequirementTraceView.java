@@ -19,6 +19,8 @@ import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.TreeItem;
+import org.eclipse.ui.IPartListener2;
+import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.part.ViewPart;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.engine.units.TradeUnits;
@@ -72,6 +74,16 @@ public final class RequirementTraceView extends ViewPart {
     private ActiveMachineReview review;
     private volatile RequirementReport shown;
     private final Consumer<ActiveMachineReview.Outcome> listener = this::show;
+    /** The newest review while the view is hidden. */
+    private ActiveMachineReview.Outcome pending;
+    private final IPartListener2 visibility = new IPartListener2() {
+        @Override
+        public void partVisible(IWorkbenchPartReference ref) {
+            if (ref.getPart(false) == RequirementTraceView.this && pending != null) {
+                show(pending);
+            }
+        }
+    };
 
     @Override
     public void createPartControl(Composite parent) {
@@ -97,18 +109,31 @@ public final class RequirementTraceView extends ViewPart {
         caution.setText("Caution: " + SafetyCaution.SHORT);
         caution.setLayoutData(new GridData(SWT.FILL, SWT.BOTTOM, true, false));
 
+        getSite().getPage().addPartListener(visibility);
         review = ActiveMachineReview.subscribe(getSite().getPage(), listener);
+        // The view becomes visible after this method returns; show what arrived meanwhile then.
+        parent.getDisplay().asyncExec(() -> {
+            if (pending != null) {
+                show(pending);
+            }
+        });
     }
 
     private void show(ActiveMachineReview.Outcome outcome) {
         if (viewer == null || viewer.getControl().isDisposed()) {
             return;
         }
+        if (!viewer.getControl().isVisible()) {
+            pending = outcome; // a hidden tree is not rebuilt per edit; it catches up when shown
+            return;
+        }
+        pending = null;
         RequirementReport report = outcome.results() == null ? null : outcome.results().requirements();
         if (report == null) {
             shown = null;
             viewer.setInput(null);
-            verdict.setText(outcome.running() ? "Reviewing " + outcome.machineName() + "…" : outcome.problem());
+            Labels.setKeepingLayout(verdict, outcome.running() ? "Reviewing " + outcome.machineName() + "…"
+                    : outcome.problem());
             verdict.setForeground(null);
         } else {
             if (report != shown) {
@@ -117,10 +142,10 @@ public final class RequirementTraceView extends ViewPart {
                 viewer.expandAll();
                 shown = report;
             }
-            verdict.setText(verdict(outcome.machineName(), report) + (outcome.running() ? " (updating…)" : ""));
+            Labels.setKeepingLayout(verdict, verdict(outcome.machineName(), report)
+                    + (outcome.running() ? " (updating…)" : ""));
             verdict.setForeground(statusColour(report.overallStatus()));
         }
-        verdict.getParent().layout(true);
     }
 
     /** E.g. "LM-3020: 1 of 12 requirements violated, 2 not evaluated; 1 gap in the trace". */
@@ -339,6 +364,7 @@ public final class RequirementTraceView extends ViewPart {
 
     @Override
     public void dispose() {
+        getSite().getPage().removePartListener(visibility);
         if (review != null) {
             review.unsubscribe(listener);
         }
