@@ -135,6 +135,15 @@ public abstract class ContourView extends ViewPart {
     /** Width to build for when the chart is not drawn ahead (hidden now; drawn at whatever size it is shown). */
     static final int DEFAULT_WIDTH_PX = 1600;
 
+    /**
+     * Samples to draw per run of a plane plot {@code widthPx} wide: three per pixel of width, at least 1000; each run
+     * of samples keeps its largest error (ContourDeviationChart.displayIndices), so no peak is lost, and the results
+     * keep every sample.
+     */
+    static int displayPoints(int widthPx) {
+        return Math.max(1000, 3 * widthPx);
+    }
+
     // ------------------------------------------------------------------------------------------------ the view
 
     @Override
@@ -359,10 +368,10 @@ public abstract class ContourView extends ViewPart {
 
     /**
      * {@link System#nanoTime()} stamps of the last review the view was told of: its timer fired, its job started, it
-     * was done, it was published.
+     * was done, it was published, its job was scheduled.
      */
     public long[] reviewTimings() {
-        return review == null ? new long[4] : review.lastTimings();
+        return review == null ? new long[5] : review.lastTimings();
     }
 
     /** Called on the UI thread each time a chart has been drawn. */

@@ -60,10 +60,13 @@ public final class LoopAnalysisView extends ViewPart {
     static final long DEBOUNCE_MS = 250;
 
     /**
-     * Pause after a model change or a selection before analysing, ms: short, because a change arrives as one command
-     * (not per keystroke); it only folds bursts (an undo of several commands, arrow keys in the tree) into one run.
+     * Pause after a model change before analysing, ms: none beyond the current turn of the event loop, which already
+     * folds a burst (the commands of one undo arrive in one turn); a change arrives as one command, not per keystroke.
      */
-    static final int MODEL_DEBOUNCE_MS = 10;
+    static final int MODEL_DEBOUNCE_MS = 0;
+
+    /** Pause after a selection before analysing, ms: arrow keys through the tree analyse only where they stop. */
+    static final int SELECTION_DEBOUNCE_MS = 30;
 
     /** Title shown for the typed loop. */
     public static final String TYPED_TITLE = "Typed loop";
@@ -216,7 +219,7 @@ public final class LoopAnalysisView extends ViewPart {
         followed = axis;
         if (axis != null) {
             axis.eAdapters().add(axisChanges);
-            scheduleFollowed(MODEL_DEBOUNCE_MS);
+            scheduleFollowed(SELECTION_DEBOUNCE_MS);
         }
     }
 
