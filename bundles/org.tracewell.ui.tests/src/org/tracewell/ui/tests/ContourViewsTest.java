@@ -84,6 +84,26 @@ class ContourViewsTest {
     }
 
     @Test
+    void theViewsFollowTheActiveMachine(@TempDir Path temp) throws Exception {
+        IWorkbenchPage page = page();
+        Path examples = MachineEditorTest.copyExamples(temp);
+        editor = MachineEditor.open(page, examples.resolve("LM-3020.machine"));
+        CircleTestView view = (CircleTestView) page.showView(CircleTestView.ID);
+        page.activate(editor);
+        waitFor(() -> CCW_CIRCLE.equals(view.shownContourId()));
+        MachineEditor t5 = MachineEditor.open(page, examples.resolve("LM-T5.machine"));
+        try {
+            // DESIGN.md: the LM-T5's circle test is R = 50 mm at F = 2 m/min.
+            waitFor(() -> "lmt5-circle-r50-ccw".equals(view.shownContourId()));
+            assertTrue(view.shownText().get(1).contains("R 50.0 mm at F 2.00 m/min"), view.shownText().get(1));
+            page.activate(editor);
+            waitFor(() -> CCW_CIRCLE.equals(view.shownContourId()));
+        } finally {
+            page.closeEditor(t5, false);
+        }
+    }
+
+    @Test
     void aKvMismatchEditRedrawsTheCircleTestWithTheEllipseItCauses(@TempDir Path temp) throws Exception {
         IWorkbenchPage page = page();
         editor = MachineEditor.open(page, MachineEditorTest.copyExamples(temp).resolve("LM-3020.machine"));

@@ -4,12 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.tracewell.ui.tests.LoopAnalysisViewTest.waitFor;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -42,13 +45,15 @@ import org.tracewell.ui.views.TrackingView;
  */
 class EditRedrawLatencyTest {
 
-    static final int WARM_UP_EDITS = 3;
-    static final int MEASURED_EDITS = 9;
+    static final int WARM_UP_EDITS = 6;
+    static final int MEASURED_EDITS = 12;
     static final double TARGET_MS = 150;
 
     private MachineEditor editor;
     /** Per contour view and edit: review, wait for a job, chart, on screen (ms). */
     private final Map<String, List<double[]>> stages = new LinkedHashMap<>();
+    /** Per edit: CPU time of every thread of the workbench from the edit until it was quiet again (ms). */
+    private final List<Double> cpuMs = new ArrayList<>();
 
     @AfterEach
     void closeEditor() {
@@ -103,14 +108,26 @@ class EditRedrawLatencyTest {
         }
         out.append(String.format(Locale.ROOT, "%-34s analysis median %s ms, charts median %s ms%n",
                 "Loop Analysis job:", fmt(median(analysisMs)), fmt(median(chartsMs))));
+        out.append(String.format(Locale.ROOT, "%-34s median %s ms of CPU (all threads, JIT and GC included), on %d"
+                + " cores shared with the load above%n", "work per edit:", fmt(median(cpuMs)),
+                Runtime.getRuntime().availableProcessors()));
         for (Map.Entry<String, List<double[]>> e : stages.entrySet()) {
-            String[] parts = new String[4];
-            for (int k = 0; k < 4; k++) {
+            int n = e.getValue().get(0).length;
+            String[] parts = new String[n];
+            for (int k = 0; k < n; k++) {
                 int stage = k;
                 parts[k] = fmt(median(e.getValue().stream().map(v -> v[stage]).toList()));
             }
-            out.append(String.format(Locale.ROOT, "%-34s review %s ms, job wait %s ms, chart %s ms, on screen %s ms"
-                    + " (medians)%n", e.getKey() + " stages:", parts[0], parts[1], parts[2], parts[3]));
+            String line = e.getKey().equals("Review")
+                    ? String.format(Locale.ROOT, "edit on the UI thread %s ms, pause %s ms, job wait %s ms, review %s"
+                            + " ms, to the UI thread %s ms, to the contour view %s ms (of the job wait, copy and schedule %s ms)",
+                            (Object[]) parts)
+                    : n == 6
+                    ? String.format(Locale.ROOT, "edit on the UI thread %s ms, pause %s ms, job wait %s ms, analysis %s"
+                            + " ms, chart %s ms, on screen %s ms", (Object[]) parts)
+                    : String.format(Locale.ROOT, "review %s ms, job wait %s ms, chart %s ms, on screen %s ms",
+                            (Object[]) parts);
+            out.append(String.format(Locale.ROOT, "%-34s %s (medians)%n", e.getKey() + " stages:", line));
         }
         for (Map.Entry<String, List<Double>> e : figures.entrySet()) {
             out.append("all ").append(e.getKey()).append(" (ms): ")
@@ -130,9 +147,11 @@ class EditRedrawLatencyTest {
             double tradeKv = 2.30 + 0.01 * edit[0]++;
             double kv = tradeKv * 1000.0 / 60.0;
             List<ContourResult> before = watched.stream().map(w -> w.view().shownContour()).toList();
+            Map<Long, Long> cpuBefore = threadCpuNanos();
             long edited = System.nanoTime();
             Optional<String> rejected = editor.valueEntry().enter(y, Literals.CASCADE_CONTROLLER__POSITION_GAIN,
                     String.format(Locale.ROOT, "%.2f (m/min)/mm", tradeKv));
+            long entered = System.nanoTime();
             assertTrue(rejected.isEmpty(), rejected.toString());
             waitFor(() -> loop.lastRedrawNanos() > edited && Math.abs(loop.shownAnalysis().steadyState().kv() - kv)
                     < 1e-6 * kv);
@@ -154,14 +173,50 @@ class EditRedrawLatencyTest {
                     long[] t = w.view().lastRedrawTimings();
                     stages.computeIfAbsent(w.name(), k -> new ArrayList<>()).add(new double[] {(t[0] - edited) / 1e6,
                         (t[1] - t[0]) / 1e6, (t[2] - t[1]) / 1e6, (t[3] - t[2]) / 1e6});
+                    if (w == watched.get(0)) {
+                        long[] r = w.view().reviewTimings();
+                        stages.computeIfAbsent("Review", k -> new ArrayList<>()).add(new double[] {
+                            (entered - edited) / 1e6, (r[0] - entered) / 1e6, (r[1] - r[0]) / 1e6,
+                            (r[2] - r[1]) / 1e6, (r[3] - r[2]) / 1e6, (t[0] - r[3]) / 1e6, (r[4] - r[0]) / 1e6});
+                    }
                 }
                 figures.computeIfAbsent("every visible view", k -> new ArrayList<>()).add(all);
                 long[] job = loop.lastJobNanos();
                 analysisMs.add(job[0] / 1e6);
                 chartsMs.add(job[1] / 1e6);
+                // The edit itself (parse, check, command, editor refresh) runs on the UI thread before anything else.
+                long[] t = loop.lastRedrawTimings();
+                stages.computeIfAbsent("Loop Analysis", k -> new ArrayList<>()).add(new double[] {
+                    (entered - edited) / 1e6, (t[0] - entered) / 1e6, (t[1] - t[0]) / 1e6, (t[2] - t[1]) / 1e6,
+                    (t[3] - t[2]) / 1e6, (t[4] - t[3]) / 1e6});
             }
             idle(200); // let the review views finish, so the next edit starts from a quiet workbench
+            if (i >= WARM_UP_EDITS) {
+                cpuMs.add(cpuSince(cpuBefore) / 1e6);
+            }
         }
+    }
+
+    /** CPU time so far of each live thread, by thread id. */
+    private static Map<Long, Long> threadCpuNanos() {
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        Map<Long, Long> cpu = new HashMap<>();
+        for (long id : threads.getAllThreadIds()) {
+            long t = threads.getThreadCpuTime(id);
+            if (t >= 0) {
+                cpu.put(id, t);
+            }
+        }
+        return cpu;
+    }
+
+    /** CPU time all live threads used since {@code before} (threads started since count in full). */
+    private static long cpuSince(Map<Long, Long> before) {
+        long sum = 0;
+        for (Map.Entry<Long, Long> now : threadCpuNanos().entrySet()) {
+            sum += now.getValue() - before.getOrDefault(now.getKey(), 0L);
+        }
+        return sum;
     }
 
     private static void idle(long ms) {

@@ -25,6 +25,14 @@ public final class TrackingChart {
     }
 
     public static JFreeChart create(String title, List<AxisTrack> axes, DisplayScale timeScale) {
+        return create(title, axes, timeScale, BodeChart.COLUMNS);
+    }
+
+    /**
+     * @param columns pixel columns to decimate for (min/max per column), e.g. the width the chart is drawn at: fewer
+     *                points draw faster and look the same
+     */
+    public static JFreeChart create(String title, List<AxisTrack> axes, DisplayScale timeScale, int columns) {
         if (axes.isEmpty()) {
             throw new IllegalArgumentException("a tracking chart needs at least one axis");
         }
@@ -39,11 +47,11 @@ public final class TrackingChart {
             AxisTrack axis = axes.get(a);
             double[] t = TimeChart.scaled(axis.timeSeconds(), timeScale.factorFromSi());
             positions.addSeries(BodeChart.xySeries(axis.axisName() + " reference", Decimation.minMax(t,
-                    TimeChart.scaled(axis.reference(), 1e3), BodeChart.COLUMNS, false)));
+                    TimeChart.scaled(axis.reference(), 1e3), columns, false)));
             positions.addSeries(BodeChart.xySeries(axis.axisName() + " actual", Decimation.minMax(t,
-                    TimeChart.scaled(axis.actual(), 1e3), BodeChart.COLUMNS, false)));
+                    TimeChart.scaled(axis.actual(), 1e3), columns, false)));
             errors.addSeries(BodeChart.xySeries(axis.axisName() + " following error", Decimation.minMax(t,
-                    TimeChart.scaled(axis.followingError(), 1e6), BodeChart.COLUMNS, false)));
+                    TimeChart.scaled(axis.followingError(), 1e6), columns, false)));
             positionLines.setSeriesPaint(2 * a, ChartStyle.seriesPaint(a));
             positionLines.setSeriesStroke(2 * a, ChartStyle.LIMIT_STROKE);
             positionLines.setSeriesPaint(2 * a + 1, ChartStyle.seriesPaint(a));

@@ -267,6 +267,17 @@ class LiveChartsTest {
         assertEquals(900, image.getWidth());
         assertEquals(600, image.getHeight());
         assertThrows(IllegalArgumentException.class, () -> TrackingChart.create("t", List.of(), DisplayScale.SECONDS));
+
+        // Decimated for the width it is drawn at: at most 4 points per pixel column, the spike still there.
+        JFreeChart narrow = TrackingChart.create("Tracking", List.of(x, y), DisplayScale.SECONDS, 500);
+        XYDataset few = ((CombinedDomainXYPlot) narrow.getPlot()).getSubplots().get(TrackingChart.FOLLOWING_ERROR)
+                .getDataset();
+        assertTrue(few.getItemCount(0) <= 4 * 500, "points: " + few.getItemCount(0));
+        double narrowMax = 0;
+        for (int i = 0; i < few.getItemCount(0); i++) {
+            narrowMax = Math.max(narrowMax, few.getYValue(0, i));
+        }
+        assertEquals(42.0, narrowMax, 1e-9);
     }
 
     // ------------------------------------------------------------------------------------------------ helpers

@@ -3,6 +3,7 @@ package org.tracewell.core.analysis;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
@@ -69,6 +70,11 @@ public final class AnalysisMemo {
         return axes.get(model, model::analyze);
     }
 
+    /** The dynamics of {@code model} if they are already computed (never computes, never waits). */
+    public Optional<AxisDynamics> knownDynamics(AxisModel model) {
+        return axes.peek(model);
+    }
+
     /** The closed loop of {@code model} for simulation ({@link AxisModel#toAxisLoop()}); cheap, kept all the same. */
     public AxisLoop loop(AxisModel model) {
         return loops.get(model, model::toAxisLoop);
@@ -132,6 +138,15 @@ public final class AnalysisMemo {
                     return size() > Store.this.capacity;
                 }
             };
+        }
+
+        Optional<V> peek(K key) {
+            CompletableFuture<V> entry;
+            synchronized (entries) {
+                entry = entries.get(key);
+            }
+            return entry != null && entry.isDone() && !entry.isCompletedExceptionally()
+                    ? Optional.of(entry.join()) : Optional.empty();
         }
 
         V get(K key, Supplier<V> compute) {

@@ -53,6 +53,11 @@ class AnalysisMemoTest {
         ContourResult cw = first.contour("lm3020-circle-r100-cw").orElseThrow();
         assertSame(ccw.run(RunDirection.CW).orElseThrow(), cw.run(RunDirection.CW).orElseThrow());
 
+        org.tracewell.engine.axis.AxisModel x1 = EngineMapping.map(machine).axis("lm3020-x1").orElseThrow().model();
+        assertSame(first.axis("lm3020-x1").orElseThrow().dynamics(), memo.knownDynamics(x1).orElseThrow(),
+                "known without computing");
+        assertTrue(AnalysisMemo.bounded(2, 2).knownDynamics(x1).isEmpty(), "never computes");
+
         MachineAnalysis again = analyse(machine, memo);
         assertEquals(4, memo.axisComputations(), "nothing changed: nothing recomputed");
         assertEquals(3, memo.runComputations());

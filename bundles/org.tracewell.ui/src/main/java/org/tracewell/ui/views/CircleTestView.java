@@ -20,9 +20,6 @@ public final class CircleTestView extends ContourView {
 
     public static final String ID = "org.tracewell.ui.view.circleTest";
 
-    /** Samples drawn per run; each run of samples keeps its largest deviation. */
-    static final int DISPLAY_POINTS = 4000;
-
     @Override
     boolean accepts(ContourResult contour) {
         return contour.fullCircle();
@@ -44,7 +41,7 @@ public final class CircleTestView extends ContourView {
     }
 
     @Override
-    Drawing draw(ContourResult contour, int runIndex, Object options) {
+    Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx) {
         List<CircleRun> runs = new ArrayList<>();
         StringBuilder figures = new StringBuilder();
         for (ContourRun run : contour.runs()) {
@@ -52,7 +49,7 @@ public final class CircleTestView extends ContourView {
                 continue;
             }
             CircleRun polar = ContourChartData.circleRun(run.direction().label(), run.circleSetup().get(),
-                    run.circleTest().get(), run.contourError(), DISPLAY_POINTS);
+                    run.circleTest().get(), run.contourError(), displayPoints(widthPx));
             runs.add(polar);
             figures.append(polar.label()).append(": G ").append(Units.um(polar.circularDeviationG()))
                     .append(" µm, F ").append(Units.um(polar.radialDeviationF())).append(" µm · ");

@@ -20,9 +20,6 @@ public final class ContourDeviationView extends ContourView {
 
     public static final String ID = "org.tracewell.ui.view.contourDeviation";
 
-    /** Samples drawn per run; each run of samples keeps its largest error. */
-    static final int DISPLAY_POINTS = 4000;
-
     /** Factors offered besides the automatic one (1–2–5 series, as {@link Magnification} picks). */
     static final double[] FACTORS = {100, 200, 500, 1000, 2000, 5000, 10_000, 20_000, 50_000};
 
@@ -70,9 +67,10 @@ public final class ContourDeviationView extends ContourView {
     }
 
     @Override
-    Drawing draw(ContourResult contour, int runIndex, Object options) {
+    Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx) {
         ContourRun run = contour.runs().get(runIndex);
-        ContourDeviation data = ContourChartData.deviation(contour.contourName(), run.contourError(), DISPLAY_POINTS);
+        ContourDeviation data = ContourChartData.deviation(contour.contourName(), run.contourError(),
+                displayPoints(widthPx));
         double chosen = (Double) options;
         boolean auto = Double.isNaN(chosen);
         double factor = auto ? ContourChartData.suggestedMagnification(data, run.path().length()) : chosen;

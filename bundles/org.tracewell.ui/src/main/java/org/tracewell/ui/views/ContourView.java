@@ -126,8 +126,23 @@ public abstract class ContourView extends ViewPart {
         return null;
     }
 
-    /** Builds the chart and the figures of {@code contour} (run {@code runIndex} when the view chooses runs). Any thread. */
-    abstract Drawing draw(ContourResult contour, int runIndex, Object options);
+    /**
+     * Builds the chart and the figures of {@code contour} (run {@code runIndex} when the view chooses runs), for a
+     * chart {@code widthPx} wide (what a time series needs no more columns than). Any thread.
+     */
+    abstract Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx);
+
+    /** Width to build for when the chart is not drawn ahead (hidden now; drawn at whatever size it is shown). */
+    static final int DEFAULT_WIDTH_PX = 1600;
+
+    /**
+     * Samples to draw per run of a plane plot {@code widthPx} wide: three per pixel of width, at least 1000; each run
+     * of samples keeps its largest error (ContourDeviationChart.displayIndices), so no peak is lost, and the results
+     * keep every sample.
+     */
+    static int displayPoints(int widthPx) {
+        return Math.max(1000, 3 * widthPx);
+    }
 
     // ------------------------------------------------------------------------------------------------ the view
 
@@ -164,7 +179,7 @@ public abstract class ContourView extends ViewPart {
         if (current != null) {
             selectionChanged(getSite().getPage().getActivePart(), current);
         }
-        review = ActiveMachineReview.subscribe(getSite().getPage(), reviewListener);
+        review = ActiveMachineReview.subscribe(getSite().getPage(), reviewListener, true);
         // The view becomes visible after this method returns; draw then.
         parent.getDisplay().asyncExec(() -> redraw(0));
     }
@@ -241,14 +256,13 @@ public abstract class ContourView extends ViewPart {
         long requested = System.nanoTime();
         work.run(delayMs, getPartName() + ": " + contour.contourName(), () -> {
             long started = System.nanoTime();
-            Drawing drawing = draw(contour, runIndex, options);
+            Drawing drawing = draw(contour, runIndex, options, size == null ? DEFAULT_WIDTH_PX : size.x);
             return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size), started, System.nanoTime());
         }, result -> {
             Drawing drawing = result.drawing();
             shown = new Shown(contour, runIndex, options, drawing);
             heading.setText(title);
-            summary.setText(drawing.summary());
-            summary.getParent().layout(true, true);
+            Labels.setKeepingLayout(summary, drawing.summary());
             canvas.show(result.pixels());
             canvas.update(); // paint now, so the time stamp is the finished redraw's
             lastRedrawNanos = System.nanoTime();
@@ -350,6 +364,14 @@ public abstract class ContourView extends ViewPart {
      */
     public long[] lastRedrawTimings() {
         return lastTimings.clone();
+    }
+
+    /**
+     * {@link System#nanoTime()} stamps of the last review the view was told of: its timer fired, its job started, it
+     * was done, it was published, its job was scheduled.
+     */
+    public long[] reviewTimings() {
+        return review == null ? new long[5] : review.lastTimings();
     }
 
     /** Called on the UI thread each time a chart has been drawn. */

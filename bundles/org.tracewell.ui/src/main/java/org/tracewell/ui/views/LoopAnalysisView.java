@@ -33,6 +33,7 @@ import org.eclipse.ui.part.ViewPart;
 import org.jfree.chart.JFreeChart;
 import org.tracewell.core.mapping.EngineMapping;
 import org.tracewell.core.mapping.MappingException;
+import org.tracewell.engine.axis.AxisDynamics;
 import org.tracewell.engine.axis.AxisModel;
 import org.tracewell.engine.loop.LoopAnalysis;
 import org.tracewell.engine.loop.LoopAnalyzer;
@@ -48,8 +49,8 @@ import org.tracewell.ui.charts.ChartCanvas;
  * transfer-function coefficients, or it is the position loop of the axis selected in the
  * Machine Editor (or any part whose selection holds a model element): the view follows the
  * selection and re-analyses when that axis changes, at once and on its own (it does not wait for the review of the
- * whole machine; both find the axis's analysis in the shared {@link ActiveMachineReview#MEMO}). Analyses and the
- * chart on top run off the UI thread; only the newest result is shown.
+ * whole machine; an axis analysis already in the shared {@link ActiveMachineReview#MEMO} is used as it is). Analyses
+ * and the chart on top run off the UI thread; only the newest result is shown.
  */
 public final class LoopAnalysisView extends ViewPart {
 
@@ -59,10 +60,13 @@ public final class LoopAnalysisView extends ViewPart {
     static final long DEBOUNCE_MS = 250;
 
     /**
-     * Pause after a model change or a selection before analysing, ms: short, because a change arrives as one command
-     * (not per keystroke); it only folds bursts (an undo of several commands, arrow keys in the tree) into one run.
+     * Pause after a model change before analysing, ms: none beyond the current turn of the event loop, which already
+     * folds a burst (the commands of one undo arrive in one turn); a change arrives as one command, not per keystroke.
      */
-    static final int MODEL_DEBOUNCE_MS = 10;
+    static final int MODEL_DEBOUNCE_MS = 0;
+
+    /** Pause after a selection before analysing, ms: arrow keys through the tree analyse only where they stop. */
+    static final int SELECTION_DEBOUNCE_MS = 30;
 
     /** Title shown for the typed loop. */
     public static final String TYPED_TITLE = "Typed loop";
@@ -96,6 +100,9 @@ public final class LoopAnalysisView extends ViewPart {
     private volatile long lastRedrawNanos;
     private volatile long lastAnalysisNanos;
     private volatile long lastChartsNanos;
+    /** Stamps of the last model-driven redraw: asked for, job started, analysed, chart drawn, on screen. */
+    private volatile long[] lastTimings = new long[5];
+    private volatile long[] pendingTimings = new long[5];
     private final ListenerList<Consumer<LoopAnalysis>> redrawListeners = new ListenerList<>();
 
     private Axis followed;
@@ -212,7 +219,7 @@ public final class LoopAnalysisView extends ViewPart {
         followed = axis;
         if (axis != null) {
             axis.eAdapters().add(axisChanges);
-            scheduleFollowed(MODEL_DEBOUNCE_MS);
+            scheduleFollowed(SELECTION_DEBOUNCE_MS);
         }
     }
 
@@ -241,10 +248,13 @@ public final class LoopAnalysisView extends ViewPart {
                 showRejected(loopTitle, e.getMessage());
                 return;
             }
-            // The position loop as AxisModel.analyze() forms it (dead time as Padé of the model's order). The whole
-            // axis analysis is asked for, not the position loop alone: the machine review needs it too, and through
-            // the memo whichever asks first computes it and the other waits for it instead of repeating it.
-            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.dynamics(engineModel).positionLoop());
+            // The position loop as AxisModel.analyze() forms it (dead time as Padé of the model's order). Known
+            // already (an undo, another selection): taken from the memo. After an edit it is analysed here, alone and
+            // at once, rather than waiting for the whole axis (both loops) that the machine review analyses meanwhile.
+            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.knownDynamics(engineModel)
+                    .map(AxisDynamics::positionLoop)
+                    .orElseGet(() -> LoopAnalyzer.analyze(
+                            engineModel.positionOpenLoop().withPadeDelay(engineModel.padeOrder()), null)));
         });
     }
 
@@ -260,14 +270,17 @@ public final class LoopAnalysisView extends ViewPart {
 
     private void run(long mine, String loopTitle, Supplier<LoopAnalysis> analysis) {
         ChartTarget target = chartOnTop();
+        long requested = System.nanoTime();
         submit(mine, 0, loopTitle, false, () -> {
             try {
                 long started = System.nanoTime();
                 LoopAnalysis result = analysis.get();
                 long analysed = System.nanoTime();
                 Outcome outcome = withCharts(result, target);
+                long charted = System.nanoTime();
                 lastAnalysisNanos = analysed - started;
-                lastChartsNanos = System.nanoTime() - analysed;
+                lastChartsNanos = charted - analysed;
+                pendingTimings = new long[] {requested, started, analysed, charted, 0};
                 return outcome;
             } catch (IllegalArgumentException | ArithmeticException e) {
                 return Outcome.rejected(e.getMessage());
@@ -400,21 +413,22 @@ public final class LoopAnalysisView extends ViewPart {
         }
         shown = outcome.analysis();
         shownTitle = title.getText();
-        message.setText(outcome.analysis().stable() ? "Closed loop stable."
-                : "Closed loop UNSTABLE: no steady-state error, bandwidth or step figures (the final-value theorem does not apply).");
+        String verdict = outcome.analysis().stable() ? "Closed loop stable."
+                : "Closed loop UNSTABLE: no steady-state error, bandwidth or step figures (the final-value theorem does not apply).";
+        boolean relayout = !verdict.equals(message.getText());
+        message.setText(verdict);
         message.setForeground(message.getDisplay().getSystemColor(
                 outcome.analysis().stable() ? SWT.COLOR_DARK_GREEN : SWT.COLOR_DARK_RED));
-        table.removeAll();
-        for (String[] row : LoopSummary.rows(outcome.analysis())) {
-            new TableItem(table, SWT.NONE).setText(row);
-        }
+        showRows(LoopSummary.rows(outcome.analysis()));
         List<ChartCanvas> canvases = canvases();
         for (int i = 0; i < canvases.size(); i++) {
             chartPending[i] = i != outcome.drawnIndex();
             canvases.get(i).show(i == outcome.drawnIndex() ? outcome.drawn() : ChartCanvas.Drawn.NONE);
         }
         ensureChart(chartTabs.getSelectionIndex()); // the tab on top changed while the job ran
-        message.getParent().layout(true);
+        if (relayout) {
+            message.getParent().layout(true);
+        }
         // Paint now, so the time stamp is that of the finished redraw rather than of a queued one.
         table.update();
         for (ChartCanvas chart : canvases) {
@@ -423,6 +437,9 @@ public final class LoopAnalysisView extends ViewPart {
             }
         }
         lastRedrawNanos = System.nanoTime();
+        long[] stamps = pendingTimings.clone();
+        stamps[4] = lastRedrawNanos;
+        lastTimings = stamps;
         for (Consumer<LoopAnalysis> listener : redrawListeners) {
             listener.accept(outcome.analysis());
         }
@@ -438,6 +455,26 @@ public final class LoopAnalysisView extends ViewPart {
         return canvases().get(index).getChart();
     }
 
+    /** Fills the results table, rewriting the rows in place when their number is unchanged (an edit of a value). */
+    private void showRows(List<String[]> rows) {
+        if (table.getItemCount() != rows.size()) {
+            table.removeAll();
+            for (String[] row : rows) {
+                new TableItem(table, SWT.NONE).setText(row);
+            }
+            return;
+        }
+        for (int i = 0; i < rows.size(); i++) {
+            TableItem item = table.getItem(i);
+            String[] row = rows.get(i);
+            for (int c = 0; c < row.length; c++) {
+                if (!row[c].equals(item.getText(c))) {
+                    item.setText(c, row[c]);
+                }
+            }
+        }
+    }
+
     /** The title of the loop now on screen, e.g. "Y · position loop" or {@link #TYPED_TITLE}. */
     public String shownTitle() {
         return shownTitle;
@@ -451,6 +488,14 @@ public final class LoopAnalysisView extends ViewPart {
     /** How long the last model-driven run took in its job: analysis and chart building, ns. */
     public long[] lastJobNanos() {
         return new long[] {lastAnalysisNanos, lastChartsNanos};
+    }
+
+    /**
+     * {@link System#nanoTime()} stamps of the last redraw of an analysed loop: asked for (after the pause), its job
+     * started, the loop analysed, the chart on top drawn into pixels, on screen.
+     */
+    public long[] lastRedrawTimings() {
+        return lastTimings.clone();
     }
 
     /** Called on the UI thread each time an analysis has been drawn. */

@@ -29,6 +29,8 @@ import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.TreeItem;
+import org.eclipse.ui.IPartListener2;
+import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.part.ViewPart;
 import org.tracewell.core.SafetyCaution;
 import org.tracewell.engine.units.TradeUnits;
@@ -98,6 +100,16 @@ public final class RequirementTraceView extends ViewPart {
     private volatile RequirementReport shown;
     private volatile ReviewResults shownResults;
     private final Consumer<ActiveMachineReview.Outcome> listener = this::show;
+    /** The newest review while the view is hidden. */
+    private ActiveMachineReview.Outcome pending;
+    private final IPartListener2 visibility = new IPartListener2() {
+        @Override
+        public void partVisible(IWorkbenchPartReference ref) {
+            if (ref.getPart(false) == RequirementTraceView.this && pending != null) {
+                show(pending);
+            }
+        }
+    };
 
     @Override
     public void createPartControl(Composite parent) {
@@ -127,8 +139,15 @@ public final class RequirementTraceView extends ViewPart {
         toolBar.add(exportAction("Export Trace as CSV…", "csv", TraceMatrixExport::csv));
         toolBar.add(exportAction("Export Trace as HTML…", "html", TraceMatrixExport::html));
 
+        getSite().getPage().addPartListener(visibility);
         review = ActiveMachineReview.subscribe(getSite().getPage(), listener);
         TracewellPreferences.store().addPropertyChangeListener(unitsListener);
+        // The view becomes visible after this method returns; show what arrived meanwhile then.
+        parent.getDisplay().asyncExec(() -> {
+            if (pending != null) {
+                show(pending);
+            }
+        });
     }
 
     /** Writes the trace matrix of the review on screen; the file dialog asks before replacing a file. */
@@ -167,12 +186,18 @@ public final class RequirementTraceView extends ViewPart {
         if (viewer == null || viewer.getControl().isDisposed()) {
             return;
         }
+        if (!viewer.getControl().isVisible()) {
+            pending = outcome; // a hidden tree is not rebuilt per edit; it catches up when shown
+            return;
+        }
+        pending = null;
         RequirementReport report = outcome.results() == null ? null : outcome.results().requirements();
         shownResults = outcome.results();
         if (report == null) {
             shown = null;
             viewer.setInput(null);
-            verdict.setText(outcome.running() ? "Reviewing " + outcome.machineName() + "…" : outcome.problem());
+            Labels.setKeepingLayout(verdict, outcome.running() ? "Reviewing " + outcome.machineName() + "…"
+                    : outcome.problem());
             verdict.setForeground(null);
         } else {
             if (report != shown) {
@@ -181,10 +206,10 @@ public final class RequirementTraceView extends ViewPart {
                 viewer.expandAll();
                 shown = report;
             }
-            verdict.setText(verdict(outcome.machineName(), report) + (outcome.running() ? " (updating…)" : ""));
+            Labels.setKeepingLayout(verdict, verdict(outcome.machineName(), report)
+                    + (outcome.running() ? " (updating…)" : ""));
             verdict.setForeground(statusColour(report.overallStatus()));
         }
-        verdict.getParent().layout(true);
     }
 
     /** E.g. "LM-3020: 1 of 12 requirements violated, 2 not evaluated; 1 gap in the trace". */
@@ -420,6 +445,7 @@ public final class RequirementTraceView extends ViewPart {
     @Override
     public void dispose() {
         TracewellPreferences.store().removePropertyChangeListener(unitsListener);
+        getSite().getPage().removePartListener(visibility);
         if (review != null) {
             review.unsubscribe(listener);
         }

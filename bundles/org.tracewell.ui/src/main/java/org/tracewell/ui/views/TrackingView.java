@@ -34,7 +34,7 @@ public final class TrackingView extends ContourView {
     }
 
     @Override
-    Drawing draw(ContourResult contour, int runIndex, Object options) {
+    Drawing draw(ContourResult contour, int runIndex, Object options, int widthPx) {
         ContourRun run = contour.runs().get(runIndex);
         List<AxisTrack> tracks = List.of(ContourChartData.track(contour.firstAxisName(), run.tracking(), 0),
                 ContourChartData.track(contour.secondAxisName(), run.tracking(), 1));
@@ -45,6 +45,6 @@ public final class TrackingView extends ContourView {
                 + ": peak " + Units.um(run.metrics().peakFollowingErrorSecond()) + " µm (v/Kv "
                 + Units.um(contour.estimate().followingErrorSecond()) + " µm) · " + Units.plain(run.metrics()
                         .duration(), 3) + " s, " + run.metrics().sampleCount() + " samples";
-        return new Drawing(TrackingChart.create(title, tracks, DisplayScale.SECONDS), figures);
+        return new Drawing(TrackingChart.create(title, tracks, DisplayScale.SECONDS, widthPx), figures);
     }
 }
