@@ -38,8 +38,7 @@ public final class AxisStepper {
      * returns the actual position at this sample instant and advances the state by one period.
      */
     public double step(double position, double velocity, double acceleration) {
-        double y = kernel.output(x, position, velocity, acceleration);
-        kernel.advance(x, next, position, velocity, acceleration);
+        double y = kernel.step(x, next, position, velocity, acceleration);
         double[] swap = x;
         x = next;
         next = swap;

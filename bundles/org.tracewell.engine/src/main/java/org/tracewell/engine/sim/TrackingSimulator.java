@@ -51,8 +51,7 @@ public final class TrackingSimulator {
             reference.readVelocities(axis, start, rd, len);
             reference.readAccelerations(axis, start, rdd, len);
             for (int k = 0; k < len; k++) {
-                out[start + k] = kernel.output(x, r[k], rd[k], rdd[k]);
-                kernel.advance(x, next, r[k], rd[k], rdd[k]);
+                out[start + k] = kernel.step(x, next, r[k], rd[k], rdd[k]);
                 double[] swap = x;
                 x = next;
                 next = swap;
