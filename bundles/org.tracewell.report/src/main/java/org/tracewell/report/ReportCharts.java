@@ -10,11 +10,11 @@ import org.tracewell.charts.BudgetBar;
 import org.tracewell.charts.BudgetBarChart;
 import org.tracewell.charts.CircleRun;
 import org.tracewell.charts.CircleTestChart;
+import org.tracewell.charts.ContourChartData;
 import org.tracewell.charts.ContourDeviation;
 import org.tracewell.charts.ContourDeviationChart;
 import org.tracewell.charts.DisplayScale;
 import org.tracewell.charts.FrequencySeries;
-import org.tracewell.charts.Magnification;
 import org.tracewell.charts.Margins;
 import org.tracewell.charts.ReversalPoint;
 import org.tracewell.charts.TimeChart;
@@ -31,8 +31,6 @@ import org.tracewell.engine.contour.CircleTestSetup;
 import org.tracewell.engine.contour.ContourErrorResult;
 import org.tracewell.engine.loop.FrequencyGrid;
 import org.tracewell.engine.loop.LoopAnalysis;
-import org.tracewell.engine.path.Path;
-import org.tracewell.engine.path.Point2;
 import org.tracewell.engine.tf.FrequencyResponse;
 import org.tracewell.engine.tf.TransferFunction;
 
@@ -93,28 +91,8 @@ final class ReportCharts {
     /** The programmed path with the contour error magnified along the normal; the factor is returned with it. */
     static Magnified contourDeviation(String title, ContourResult contour, ContourRun run) {
         ContourErrorResult errors = run.contourError();
-        Path path = errors.path();
-        int[] keep = ContourDeviationChart.displayIndices(errors.signedErrors(), DISPLAY_POINTS);
-        int m = keep.length;
-        double[] pu = new double[m];
-        double[] pv = new double[m];
-        double[] nu = new double[m];
-        double[] nv = new double[m];
-        double[] e = new double[m];
-        for (int i = 0; i < m; i++) {
-            double s = errors.pathParameter(keep[i]);
-            Point2 p = path.pointAt(s);
-            Point2 normal = path.normalAt(s);
-            pu[i] = p.u();
-            pv[i] = p.v();
-            nu[i] = normal.u();
-            nv[i] = normal.v();
-            e[i] = errors.signedError(keep[i]);
-        }
-        ContourDeviation data = new ContourDeviation(contour.contourName(), pu, pv, nu, nv, e);
-        double extent = data.extent() > 0 ? data.extent() : path.length();
-        double factor = extent > 0 ? Magnification.suggest(extent, data.maxAbsError(), Magnification.DEFAULT_FRACTION)
-                : 1;
+        ContourDeviation data = ContourChartData.deviation(contour.contourName(), errors, DISPLAY_POINTS);
+        double factor = ContourChartData.suggestedMagnification(data, errors.path().length());
         return new Magnified(ContourDeviationChart.create(title, data, factor, contour.firstAxisName(),
                 contour.secondAxisName()), factor);
     }
@@ -134,54 +112,9 @@ final class ReportCharts {
                 contour.firstAxisName(), contour.secondAxisName()), scale.magnification()));
     }
 
-    /**
-     * Polar angle about the nominal centre and radial deviation ρ − R of every evaluated sample (overshoot arcs
-     * left out). The actual point is rebuilt from its nearest path point and the signed contour error along the
-     * left normal, which is exact for the shortest-distance error.
-     */
+    /** Polar radial deviation of the evaluated samples of a circle-test run (overshoot arcs left out). */
     static CircleRun polar(String label, CircleTestSetup setup, CircleTestResult test, ContourErrorResult errors) {
-        Path path = errors.path();
-        int[] range = evaluatedRange(setup, errors);
-        double[] window = java.util.Arrays.copyOfRange(errors.signedErrors(), range[0], range[1]);
-        int[] keep = ContourDeviationChart.displayIndices(window, DISPLAY_POINTS);
-        double[] angle = new double[keep.length];
-        double[] deviation = new double[keep.length];
-        for (int i = 0; i < keep.length; i++) {
-            int k = range[0] + keep[i];
-            double s = errors.pathParameter(k);
-            Point2 p = path.pointAt(s);
-            Point2 normal = path.normalAt(s);
-            double e = errors.signedError(k);
-            double du = p.u() + e * normal.u() - setup.centre().u();
-            double dv = p.v() + e * normal.v() - setup.centre().v();
-            angle[i] = Math.atan2(dv, du);
-            deviation[i] = Math.hypot(du, dv) - setup.radius();
-        }
-        return new CircleRun(label, angle, deviation, test.circularDeviation(), test.radialDeviation());
-    }
-
-    /**
-     * Samples [from, to) of the evaluated full circle, in time order: from the first sample whose nearest path
-     * point lies on the circle segment up to the first that leaves it. Leaving is also recognised by the nearest
-     * point jumping back by more than half a turn: the outgoing overshoot arc lies on top of the circle's start,
-     * and a nearest-point search may place its samples there rather than on the overshoot segment.
-     */
-    static int[] evaluatedRange(CircleTestSetup setup, ContourErrorResult errors) {
-        Path path = errors.path();
-        int full = setup.overshootAngle() > 0 && path.segmentCount() > 1 ? 1 : 0;
-        double start = path.segmentStart(full);
-        double end = start + path.segment(full).length();
-        double halfTurn = Math.PI * setup.radius();
-        double[] s = errors.pathParameters();
-        int from = 0;
-        while (from < s.length && s[from] < start) {
-            from++;
-        }
-        int to = from;
-        while (to < s.length && s[to] <= end && (to == from || s[to] > s[to - 1] - halfTurn)) {
-            to++;
-        }
-        return new int[] {from, to};
+        return ContourChartData.circleRun(label, setup, test, errors, DISPLAY_POINTS);
     }
 
     /** Ranked budget contributors against the requirement's limit (and the allowed total after the reserve). */
