@@ -9,8 +9,10 @@ import org.apache.commons.math3.complex.Complex;
 import org.apache.commons.math3.exception.MathIllegalArgumentException;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
 import org.tracewell.engine.linalg.ZeroOrderHold;
+import org.tracewell.engine.sim.ContinuousStateSpace;
+import org.tracewell.engine.sim.DiscreteStateSpace;
+import org.tracewell.engine.sim.SampledLoop;
 import org.tracewell.engine.tf.StateSpace;
 import org.tracewell.engine.tf.TransferFunction;
 
@@ -19,9 +21,9 @@ import org.tracewell.engine.tf.TransferFunction;
  * <p>
  * Method ({@link #METHOD}): the transfer function is rescaled in frequency so its poles are
  * of order one, realised as a cascade of first- and second-order sections and discretised
- * with the zero-order hold (Van Loan block exponential). For a step input the hold is exact, so every sample is
- * the true response up to rounding. Rise, peak and settling instants are then refined between
- * samples with Brent's method on the exact inter-sample solution x(t_k + τ) = Φ(τ)x_k + Γ(τ).
+ * with the zero-order hold (Van Loan block exponential) and run by the simulation's loop kernel
+ * ({@link SampledLoop}). For a step input the hold is exact, so every sample is the true response up to
+ * rounding. Rise, peak and settling instants are then refined between samples with Brent's method on the exact inter-sample solution x(t_k + τ) = Φ(τ)x_k + Γ(τ).
  * The final value is T(0), exact.
  * <p>
  * Definitions: overshoot = (y_max − y_∞)/|y_∞|·100 %; peak time = instant of y_max (empty
@@ -127,62 +129,128 @@ public final class StepResponse {
                 + horizon * a + " s");
     }
 
-    /** One sampled run in scaled time. */
+    /**
+     * One sampled run in scaled time, by the simulation's loop kernel (tens of thousands of samples per loop
+     * analysed). The kernel keeps an orthogonally transformed state; the run keeps it every {@link #CHECKPOINT}
+     * samples, and the few instants that are refined between samples re-run from the nearest one.
+     */
     private static final class Simulation {
-        final StateSpace ss;
+        static final int CHECKPOINT = 256;
         final RealMatrix a;
         final RealMatrix b;
-        final RealVector c;
+        final double[][] aRows;
+        final double[] bColumn;
+        final double[] c;
         final double d;
+        final int states;
         final double h;
         final double[] times;
         final double[] y;
-        final RealVector[] states;
+        final SampledLoop kernel;
+        /** Kernel state at samples 0, CHECKPOINT, 2·CHECKPOINT, … */
+        final double[][] checkpoints;
 
         Simulation(StateSpace ss, double horizon, double fastest) {
-            this.ss = ss;
             this.a = ss.a();
             this.b = ss.b();
-            this.c = ss.c().getRowVector(0);
+            this.aRows = a.getData();
+            this.bColumn = b.getColumn(0);
+            this.c = ss.c().getRow(0);
             this.d = ss.d();
+            this.states = c.length;
             int n = (int) Math.ceil(Math.max(MIN_SAMPLES, horizon * fastest * 10));
             n = Math.min(n, MAX_SAMPLES);
             this.h = horizon / n;
-            ZeroOrderHold.Discretized zoh = ZeroOrderHold.discretize(a, b, h);
-            RealMatrix phi = zoh.phi();
-            RealVector gamma = zoh.gamma().getColumnVector(0);
+            kernel = SampledLoop.of(DiscreteStateSpace.zeroOrderHold(
+                    new ContinuousStateSpace(aRows, b.getData(), c, new double[] {d}), h));
             times = new double[n + 1];
             y = new double[n + 1];
-            states = new RealVector[n + 1];
-            RealVector x = gamma.mapMultiply(0.0);
+            checkpoints = new double[n / CHECKPOINT + 1][];
+            double[] one = new double[CHECKPOINT];
+            java.util.Arrays.fill(one, 1.0);
+            double[] x = new double[kernel.stateCount()];
+            double[] spare = new double[kernel.stateCount()];
+            for (int k = 0; k <= n; k += CHECKPOINT) {
+                checkpoints[k / CHECKPOINT] = x.clone();
+                int length = Math.min(CHECKPOINT, n + 1 - k);
+                double[] now = kernel.run(x, spare, one, null, null, y, k, length);
+                spare = now == x ? spare : x;
+                x = now;
+            }
             for (int k = 0; k <= n; k++) {
                 times[k] = k * h;
-                states[k] = x;
-                y[k] = c.dotProduct(x) + d;
                 if (!Double.isFinite(y[k])) {
                     // Poles spread over too many decades for one sampled horizon.
                     throw new ArithmeticException("step response overflowed at sample " + k + " of " + n);
                 }
-                x = phi.operate(x).add(gamma);
             }
+        }
+
+        /** The last sample asked for by {@link #stateAtSample} and its state (a refinement asks for one many times). */
+        private int cachedSample = -1;
+        private double[] cachedState;
+
+        /** State of sample k in the model's coordinates, re-run from the checkpoint before it. */
+        double[] stateAtSample(int k) {
+            if (k == cachedSample) {
+                return cachedState;
+            }
+            double[] x = checkpoints[k / CHECKPOINT].clone();
+            double[] spare = new double[x.length];
+            for (int i = k / CHECKPOINT * CHECKPOINT; i < k; i++) {
+                kernel.step(x, spare, 1.0, 0.0, 0.0);
+                double[] swap = x;
+                x = spare;
+                spare = swap;
+            }
+            cachedState = kernel.toModel(x);
+            cachedSample = k;
+            return cachedState;
         }
 
         /** State at t_k + τ, 0 ≤ τ ≤ h, from the exact solution. */
-        RealVector stateAt(int k, double tau) {
+        double[] stateAt(int k, double tau) {
+            double[] xk = stateAtSample(k);
             if (tau == 0) {
-                return states[k];
+                return xk;
             }
             ZeroOrderHold.Discretized z = ZeroOrderHold.discretize(a, b, tau);
-            return z.phi().operate(states[k]).add(z.gamma().getColumnVector(0));
+            double[][] phi = z.phi().getData();
+            double[] out = new double[states];
+            for (int i = 0; i < states; i++) {
+                double sum = z.gamma().getEntry(i, 0);
+                for (int j = 0; j < states; j++) {
+                    sum += phi[i][j] * xk[j];
+                }
+                out[i] = sum;
+            }
+            return out;
+        }
+
+        private double output(double[] state) {
+            double sum = d;
+            for (int j = 0; j < states; j++) {
+                sum += c[j] * state[j];
+            }
+            return sum;
         }
 
         double outputAt(int k, double tau) {
-            return c.dotProduct(stateAt(k, tau)) + d;
+            return output(stateAt(k, tau));
         }
 
+        /** dy/dt = C(Ax + B) at t_k + τ. */
         double slopeAt(int k, double tau) {
-            RealVector x = stateAt(k, tau);
-            return c.dotProduct(a.operate(x).add(b.getColumnVector(0)));
+            double[] state = stateAt(k, tau);
+            double sum = 0;
+            for (int i = 0; i < states; i++) {
+                double dx = bColumn[i];
+                for (int j = 0; j < states; j++) {
+                    dx += aRows[i][j] * state[j];
+                }
+                sum += c[i] * dx;
+            }
+            return sum;
         }
 
         /** Root of f on sample interval [t_k, t_k+1]; f must change sign. */

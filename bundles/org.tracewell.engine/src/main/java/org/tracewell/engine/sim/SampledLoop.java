@@ -3,13 +3,16 @@ package org.tracewell.engine.sim;
 /**
  * The sample-by-sample kernel of a discretised axis loop, in an upper-Hessenberg realisation:
  * x̃ = Qᵀx with Q orthogonal (Householder reflections), so Φ̃ = QᵀΦQ has zeros below its first
- * subdiagonal (the step below uses it densely, eight rows at a time, which is faster than exploiting the
+ * subdiagonal (the kernel below uses it densely, eight rows at a time, which is faster than exploiting the
  * zeros with one dependent sum per row). An orthogonal change of
  * state coordinates leaves the input–output behaviour unchanged and is numerically stable (Golub &amp;
  * Van Loan, Matrix Computations, 4th ed., §7.4.2 — from memory). The states seen here are therefore
- * not the model's physical states; only the output is used.
+ * not the model's physical states; {@link #toModel} maps one back where a caller needs it.
+ * <p>
+ * Inputs: an axis loop's three (r, ṙ, r̈), or a single input (a step response), which runs as the first of three
+ * with the other two unused. Immutable; the state arrays belong to the caller, so one kernel serves many threads.
  */
-final class SampledLoop {
+public final class SampledLoop {
 
     /** Rows advanced together: eight independent sums keep the CPU's multiply-add units busy. */
     private static final int BLOCK = 8;
@@ -22,9 +25,13 @@ final class SampledLoop {
     /** Γ̃ padded to the block rows, three inputs per row. */
     private final double[] gamma;
     private final double[] c;
+    /** Output weights of the later blocks: none (the output is summed with the first block). */
+    private final double[] zeros;
     private final double d0;
     private final double d1;
     private final double d2;
+    /** True when the velocity and acceleration inputs drive nothing (no feedforward): their terms are skipped. */
+    private final boolean positionOnly;
     private final double[][] q;
 
     private SampledLoop(int n, double[] phi, double[] gamma, double[] c, double[] d, double[][] q) {
@@ -40,17 +47,25 @@ final class SampledLoop {
         }
         this.gamma = java.util.Arrays.copyOf(gamma, padded * 3);
         this.c = c;
+        this.zeros = new double[n];
         this.d0 = d[0];
         this.d1 = d[1];
         this.d2 = d[2];
+        boolean unused = d1 == 0 && d2 == 0;
+        for (int i = 0; i < n && unused; i++) {
+            unused = gamma[i * 3 + 1] == 0 && gamma[i * 3 + 2] == 0;
+        }
+        this.positionOnly = unused;
         this.q = q;
     }
 
-    /** Hessenberg realisation of a discretised loop with the three inputs (r, ṙ, r̈). */
-    static SampledLoop of(DiscreteStateSpace dss) {
+    /** Hessenberg realisation of a discretised loop with the three inputs (r, ṙ, r̈), or with one input. */
+    public static SampledLoop of(DiscreteStateSpace dss) {
         int n = dss.stateCount();
-        if (dss.inputCount() != 3) {
-            throw new IllegalArgumentException("an axis loop kernel needs the inputs (r, ṙ, r̈), got " + dss.inputCount());
+        int inputs = dss.inputCount();
+        if (inputs != 3 && inputs != 1) {
+            throw new IllegalArgumentException("a loop kernel needs the inputs (r, ṙ, r̈) or a single input, got "
+                    + inputs + " inputs");
         }
         double[][] h = new double[n][n];
         double[][] q = new double[n][n];
@@ -122,8 +137,8 @@ final class SampledLoop {
             System.arraycopy(h[i], 0, phi, i * n, n);
             for (int u = 0; u < 3; u++) {
                 double s = 0;
-                for (int j = 0; j < n; j++) {
-                    s += q[j][i] * dss.gamma(j, u); // Γ̃ = QᵀΓ
+                for (int j = 0; j < n && u < inputs; j++) {
+                    s += q[j][i] * dss.gamma(j, u); // Γ̃ = QᵀΓ (unused inputs of a single-input system stay zero)
                 }
                 gamma[i * 3 + u] = s;
             }
@@ -133,16 +148,35 @@ final class SampledLoop {
             }
             c[i] = s;
         }
-        return new SampledLoop(n, phi, gamma, c, dss.dRow(), q);
+        double[] d = java.util.Arrays.copyOf(dss.dRow(), 3);
+        return new SampledLoop(n, phi, gamma, c, d, q);
     }
 
     /** Length of the state arrays this kernel works on (the state count padded to whole blocks of rows). */
-    int stateCount() {
+    public int stateCount() {
         return padded;
     }
 
-    /** The internal state Qᵀx of a model state x. */
-    double[] toInternal(double[] x) {
+    /** True when the kernel skips the velocity and acceleration inputs (they drive nothing). */
+    public boolean positionOnly() {
+        return positionOnly;
+    }
+
+    /** The model state x = Qx̃ of an internal state x̃ (as {@link #run} leaves it), as long as the model's. */
+    public double[] toModel(double[] internal) {
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            double s = 0;
+            for (int j = 0; j < n; j++) {
+                s += q[i][j] * internal[j];
+            }
+            out[i] = s;
+        }
+        return out;
+    }
+
+    /** The internal state Qᵀx of a model state x, padded to {@link #stateCount()}. */
+    public double[] toInternal(double[] x) {
         double[] out = new double[padded];
         for (int i = 0; i < n; i++) {
             double s = 0;
@@ -155,52 +189,135 @@ final class SampledLoop {
     }
 
     /**
-     * One sample: returns the output y = C̃x + D·u at this instant and writes next = Φ̃x + Γ̃u, eight rows at a
-     * time over every column. This ignores the Hessenberg zeros, but eight independent running sums (instead of
-     * one dependent chain per row) let a core overlap the multiply-adds; with the output sum in the same pass
-     * over x it is about twice as fast for eight states (benchmarks/contour-benchmark.txt).
+     * One sample: returns the output y = C̃x + D·u at this instant and writes next = Φ̃x + Γ̃u. See
+     * {@link #run} for the arithmetic; a streaming run calls this once per sample.
      */
-    double step(double[] x, double[] next, double u0, double u1, double u2) {
-        double[] p = block;
-        double[] g = gamma;
-        double y = d0 * u0 + d1 * u1 + d2 * u2;
-        double[] cx = c;
-        for (int b = 0, base = 0; b < padded; b += BLOCK, base += n * BLOCK) {
-            boolean first = b == 0;
-            double s0 = 0;
-            double s1 = 0;
-            double s2 = 0;
-            double s3 = 0;
-            double s4 = 0;
-            double s5 = 0;
-            double s6 = 0;
-            double s7 = 0;
-            double sy = 0;
-            for (int j = 0, o = base; j < n; j++, o += BLOCK) {
-                double xj = x[j];
-                sy += cx[j] * xj;
-                s0 += p[o] * xj;
-                s1 += p[o + 1] * xj;
-                s2 += p[o + 2] * xj;
-                s3 += p[o + 3] * xj;
-                s4 += p[o + 4] * xj;
-                s5 += p[o + 5] * xj;
-                s6 += p[o + 6] * xj;
-                s7 += p[o + 7] * xj;
+    public double step(double[] x, double[] next, double u0, double u1, double u2) {
+        if (positionOnly) {
+            double y = rows1(0, c, x, next, u0);
+            for (int b = BLOCK; b < padded; b += BLOCK) {
+                rows1(b, zeros, x, next, u0);
             }
-            int q = b * 3;
-            next[b] = s0 + g[q] * u0 + g[q + 1] * u1 + g[q + 2] * u2;
-            next[b + 1] = s1 + g[q + 3] * u0 + g[q + 4] * u1 + g[q + 5] * u2;
-            next[b + 2] = s2 + g[q + 6] * u0 + g[q + 7] * u1 + g[q + 8] * u2;
-            next[b + 3] = s3 + g[q + 9] * u0 + g[q + 10] * u1 + g[q + 11] * u2;
-            next[b + 4] = s4 + g[q + 12] * u0 + g[q + 13] * u1 + g[q + 14] * u2;
-            next[b + 5] = s5 + g[q + 15] * u0 + g[q + 16] * u1 + g[q + 17] * u2;
-            next[b + 6] = s6 + g[q + 18] * u0 + g[q + 19] * u1 + g[q + 20] * u2;
-            next[b + 7] = s7 + g[q + 21] * u0 + g[q + 22] * u1 + g[q + 23] * u2;
-            if (first) {
-                y += sy;
-            }
+            return y;
+        }
+        double y = rows3(0, c, x, next, u0, u1, u2);
+        for (int b = BLOCK; b < padded; b += BLOCK) {
+            rows3(b, zeros, x, next, u0, u1, u2);
         }
         return y;
+    }
+
+    /**
+     * Runs {@code length} samples from the reference arrays (position, velocity, acceleration held over each period)
+     * into {@code out[offset…]}, starting from state {@code x} with {@code spare} as scratch; returns the array that
+     * holds the state after the last sample (one of the two). A kernel without velocity and acceleration terms
+     * ({@link #positionOnly()}, e.g. a single-input system) reads only {@code r}; the others may then be null.
+     * <p>
+     * Φ̃x + Γ̃u is computed eight rows at a time over every column, ignoring the Hessenberg zeros: eight independent
+     * fused multiply-add chains (instead of one dependent sum per row) keep a core's multiply-add units busy, and
+     * the input terms start each chain, off the path from one state to the next. A loop without feedforward has
+     * zero velocity and acceleration columns, which its own kernel skips (a third of the arithmetic of an
+     * eight-state loop). The two kernels are kept apart, and each sample loop calls one of them, because one kernel
+     * that asks which inputs to use measured almost twice as slow (benchmarks/contour-benchmark.txt).
+     */
+    public double[] run(double[] x, double[] spare, double[] r, double[] rd, double[] rdd, double[] out, int offset,
+            int length) {
+        double[] now = x;
+        double[] next = spare;
+        if (positionOnly) {
+            for (int k = 0; k < length; k++) {
+                double u0 = r[k];
+                out[offset + k] = rows1(0, c, now, next, u0);
+                for (int b = BLOCK; b < padded; b += BLOCK) {
+                    rows1(b, zeros, now, next, u0);
+                }
+                double[] swap = now;
+                now = next;
+                next = swap;
+            }
+        } else {
+            for (int k = 0; k < length; k++) {
+                out[offset + k] = step(now, next, r[k], rd[k], rdd[k]);
+                double[] swap = now;
+                now = next;
+                next = swap;
+            }
+        }
+        return now;
+    }
+
+    /**
+     * Rows b…b+7 of Φ̃x + Γ̃u into next, all three inputs; returns D·u + cx·x summed in the same pass over x (the
+     * output for the first block with cx = C̃, nothing for later ones with zeros).
+     */
+    private double rows3(int b, double[] cx, double[] x, double[] next, double u0, double u1, double u2) {
+        double[] p = block;
+        double[] g = gamma;
+        int q = b * 3;
+        double y = b == 0 ? d0 * u0 + d1 * u1 + d2 * u2 : 0;
+        double s0 = g[q] * u0 + g[q + 1] * u1 + g[q + 2] * u2;
+        double s1 = g[q + 3] * u0 + g[q + 4] * u1 + g[q + 5] * u2;
+        double s2 = g[q + 6] * u0 + g[q + 7] * u1 + g[q + 8] * u2;
+        double s3 = g[q + 9] * u0 + g[q + 10] * u1 + g[q + 11] * u2;
+        double s4 = g[q + 12] * u0 + g[q + 13] * u1 + g[q + 14] * u2;
+        double s5 = g[q + 15] * u0 + g[q + 16] * u1 + g[q + 17] * u2;
+        double s6 = g[q + 18] * u0 + g[q + 19] * u1 + g[q + 20] * u2;
+        double s7 = g[q + 21] * u0 + g[q + 22] * u1 + g[q + 23] * u2;
+        for (int j = 0, o = b * n; j < n; j++, o += BLOCK) {
+            double xj = x[j];
+            y = Math.fma(cx[j], xj, y);
+            s0 = Math.fma(p[o], xj, s0);
+            s1 = Math.fma(p[o + 1], xj, s1);
+            s2 = Math.fma(p[o + 2], xj, s2);
+            s3 = Math.fma(p[o + 3], xj, s3);
+            s4 = Math.fma(p[o + 4], xj, s4);
+            s5 = Math.fma(p[o + 5], xj, s5);
+            s6 = Math.fma(p[o + 6], xj, s6);
+            s7 = Math.fma(p[o + 7], xj, s7);
+        }
+        store(next, b, s0, s1, s2, s3, s4, s5, s6, s7);
+        return y;
+    }
+
+    /** As {@link #rows3} for a loop driven by the position input alone. */
+    private double rows1(int b, double[] cx, double[] x, double[] next, double u0) {
+        double[] p = block;
+        double[] g = gamma;
+        int q = b * 3;
+        double y = b == 0 ? d0 * u0 : 0;
+        double s0 = g[q] * u0;
+        double s1 = g[q + 3] * u0;
+        double s2 = g[q + 6] * u0;
+        double s3 = g[q + 9] * u0;
+        double s4 = g[q + 12] * u0;
+        double s5 = g[q + 15] * u0;
+        double s6 = g[q + 18] * u0;
+        double s7 = g[q + 21] * u0;
+        for (int j = 0, o = b * n; j < n; j++, o += BLOCK) {
+            double xj = x[j];
+            y = Math.fma(cx[j], xj, y);
+            s0 = Math.fma(p[o], xj, s0);
+            s1 = Math.fma(p[o + 1], xj, s1);
+            s2 = Math.fma(p[o + 2], xj, s2);
+            s3 = Math.fma(p[o + 3], xj, s3);
+            s4 = Math.fma(p[o + 4], xj, s4);
+            s5 = Math.fma(p[o + 5], xj, s5);
+            s6 = Math.fma(p[o + 6], xj, s6);
+            s7 = Math.fma(p[o + 7], xj, s7);
+        }
+        store(next, b, s0, s1, s2, s3, s4, s5, s6, s7);
+        return y;
+    }
+
+    private static void store(double[] next, int b, double s0, double s1, double s2, double s3, double s4, double s5,
+            double s6, double s7) {
+        next[b] = s0;
+        next[b + 1] = s1;
+        next[b + 2] = s2;
+        next[b + 3] = s3;
+        next[b + 4] = s4;
+        next[b + 5] = s5;
+        next[b + 6] = s6;
+        next[b + 7] = s7;
     }
 }

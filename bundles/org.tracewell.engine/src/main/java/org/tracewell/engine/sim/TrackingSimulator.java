@@ -50,12 +50,9 @@ public final class TrackingSimulator {
             reference.readPositions(axis, start, r, len);
             reference.readVelocities(axis, start, rd, len);
             reference.readAccelerations(axis, start, rdd, len);
-            for (int k = 0; k < len; k++) {
-                out[start + k] = kernel.step(x, next, r[k], rd[k], rdd[k]);
-                double[] swap = x;
-                x = next;
-                next = swap;
-            }
+            double[] now = kernel.run(x, next, r, rd, rdd, out, start, len);
+            next = now == x ? next : x;
+            x = now;
         }
     }
 }

@@ -55,30 +55,73 @@ class TrackingSimulatorTest {
 
     @Test
     void hessenbergKernelMatchesTheDenseRecursionInModelCoordinates() {
-        // the simulator runs an orthogonally transformed (upper-Hessenberg) realisation; compare with the
-        // plain recursion x ← Φx + Γu, y = Cx + Du in the model's own states (independent arithmetic)
-        AxisLoop loop = AxisLoop.closePositionLoop("X", DiscretisationTest.fourStatePlant(), 30, 0.8, 0.5, 1e-3);
+        // all three inputs drive the loop (feedforward), one block of rows
+        assertKernelMatchesDenseRecursion(AxisLoop.closePositionLoop("X", DiscretisationTest.fourStatePlant(), 30, 0.8,
+                0.5, 1e-3), false);
+    }
+
+    @Test
+    void positionOnlyKernelMatchesTheDenseRecursion() {
+        // no feedforward: the kernel that skips the velocity and acceleration terms
+        assertKernelMatchesDenseRecursion(AxisLoop.closePositionLoop("X", DiscretisationTest.fourStatePlant(), 30, 0,
+                0, 0), true);
+    }
+
+    @Test
+    void kernelWithSeveralBlocksOfRowsMatchesTheDenseRecursion() {
+        // 13 states: two blocks of eight rows (the second padded), with and without feedforward
+        ContinuousStateSpace plant = lagChainPlant(12);
+        assertKernelMatchesDenseRecursion(AxisLoop.closePositionLoop("X", plant, 30, 0.8, 0.5, 1e-3), false);
+        assertKernelMatchesDenseRecursion(AxisLoop.closePositionLoop("X", plant, 30, 0, 0, 0), true);
+    }
+
+    /** Velocity command → position through {@code lags} first-order lags (0.1 ms each) and an integrator. */
+    private static ContinuousStateSpace lagChainPlant(int lags) {
+        int n = lags + 1;
+        double[][] a = new double[n][n];
+        double[][] b = new double[n][1];
+        double tau = 1e-4;
+        for (int i = 0; i < lags; i++) {
+            a[i][i] = -1 / tau;
+            if (i > 0) {
+                a[i][i - 1] = 1 / tau;
+            }
+        }
+        b[0][0] = 1 / tau;
+        a[lags][lags - 1] = 1; // position = ∫ velocity
+        double[] c = new double[n];
+        c[lags] = 1;
+        return new ContinuousStateSpace(a, b, c, new double[] {0});
+    }
+
+    /**
+     * The simulator runs an orthogonally transformed (upper-Hessenberg) realisation; compare with the plain recursion
+     * x ← Φx + Γu, y = Cx + Du in the model's own states (independent arithmetic).
+     */
+    private static void assertKernelMatchesDenseRecursion(AxisLoop loop, boolean positionOnly) {
         Trajectory ref = rampAlongX(0.08);
         TrackingResult r = TrackingSimulator.simulate(ref, List.of(loop, loop));
         DiscreteStateSpace d = DiscreteStateSpace.zeroOrderHold(loop.system(), DT);
+        assertEquals(positionOnly, SampledLoop.of(d).positionOnly(), "kernel without velocity/acceleration terms");
+        int n = d.stateCount();
         double[] x = loop.restState(ref.position(0, 0));
-        double[] next = new double[4];
+        double[] next = new double[n];
         double[] cRow = loop.system().c();
         double[] dRow = loop.system().d();
         double worst = 0;
         for (int k = 0; k < ref.sampleCount(); k++) {
             double[] u = {ref.position(0, k), ref.velocity(0, k), ref.acceleration(0, k)};
             double y = 0;
-            for (int i = 0; i < 4; i++) {
+            for (int i = 0; i < n; i++) {
                 y += cRow[i] * x[i];
             }
             for (int j = 0; j < 3; j++) {
                 y += dRow[j] * u[j];
             }
             worst = Math.max(worst, Math.abs(y - r.actual(0, k)));
-            for (int i = 0; i < 4; i++) {
+            for (int i = 0; i < n; i++) {
                 double sum = 0;
-                for (int j = 0; j < 4; j++) {
+                for (int j = 0; j < n; j++) {
                     sum += d.phi(i, j) * x[j];
                 }
                 for (int j = 0; j < 3; j++) {
@@ -86,10 +129,10 @@ class TrackingSimulatorTest {
                 }
                 next[i] = sum;
             }
-            System.arraycopy(next, 0, x, 0, 4);
+            System.arraycopy(next, 0, x, 0, n);
         }
         // rounding only: positions ~0.2 m, 2000 steps of a well-damped loop
-        assertEquals(0.0, worst, 1e-14);
+        assertEquals(0.0, worst, 1e-14, "states " + n);
     }
 
     @Test
