@@ -45,9 +45,15 @@ import org.tracewell.ui.views.TrackingView;
  */
 class EditRedrawLatencyTest {
 
-    static final int WARM_UP_EDITS = 6;
+    /**
+     * Edits before measuring: a workbench in use has run the analysis and drawing code often enough to be compiled;
+     * with fewer, the first round measures the JIT compiler at work on two cores as much as the views.
+     */
+    static final int WARM_UP_EDITS = 20;
     static final int MEASURED_EDITS = 12;
     static final double TARGET_MS = 150;
+    /** Pause between edits, ms: longer than the Machine Editor's debounce of its checks (250 ms). */
+    static final long QUIET_MS = 400;
 
     private MachineEditor editor;
     /** Per contour view and edit: review, wait for a job, chart, on screen (ms). */
@@ -120,8 +126,9 @@ class EditRedrawLatencyTest {
             }
             String line = e.getKey().equals("Review")
                     ? String.format(Locale.ROOT, "edit on the UI thread %s ms, pause %s ms, job wait %s ms, review %s"
-                            + " ms, to the UI thread %s ms, to the contour view %s ms (of the job wait, copy and schedule %s ms)",
-                            (Object[]) parts)
+                            + " ms, to the UI thread %s ms; the first contour view asked to draw %s ms after the whole"
+                            + " review was published (negative: before, from its contour done ahead) (of the job wait,"
+                            + " copy and schedule %s ms)", (Object[]) parts)
                     : n == 6
                     ? String.format(Locale.ROOT, "edit on the UI thread %s ms, pause %s ms, job wait %s ms, analysis %s"
                             + " ms, chart %s ms, on screen %s ms", (Object[]) parts)
@@ -190,7 +197,9 @@ class EditRedrawLatencyTest {
                     (entered - edited) / 1e6, (t[0] - entered) / 1e6, (t[1] - t[0]) / 1e6, (t[2] - t[1]) / 1e6,
                     (t[3] - t[2]) / 1e6, (t[4] - t[3]) / 1e6});
             }
-            idle(200); // let the review views finish, so the next edit starts from a quiet workbench
+            // Let the views finish and the editor's checks run (250 ms after an edit), so the next edit starts from a
+            // quiet workbench and each figure is one edit's, not the tail of the one before.
+            idle(QUIET_MS);
             if (i >= WARM_UP_EDITS) {
                 cpuMs.add(cpuSince(cpuBefore) / 1e6);
             }

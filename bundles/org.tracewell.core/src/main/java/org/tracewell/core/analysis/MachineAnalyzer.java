@@ -1,6 +1,7 @@
 package org.tracewell.core.analysis;
 
 import java.util.ArrayList;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -9,6 +10,7 @@ import java.util.OptionalDouble;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Consumer;
 import java.util.function.Supplier;
 
 import org.tracewell.core.mapping.MachineInputs;
@@ -66,6 +68,17 @@ public final class MachineAnalyzer {
      */
     public static MachineAnalysis analyze(MachineInputs inputs, List<String> contourNames, ProgressListener progress,
             CancellationFlag cancel, AnalysisMemo memo) {
+        return analyze(inputs, contourNames, progress, cancel, memo, contour -> { });
+    }
+
+    /**
+     * As {@link #analyze(MachineInputs, List, ProgressListener, CancellationFlag, AnalysisMemo)}, telling
+     * {@code contourDone} of each contour's result as soon as its runs are done, before the axes' dynamics and the
+     * other contours (a view of one contour need not wait for the whole machine). It is called once per contour, on
+     * whichever thread finished the contour's last run, with the very object the analysis returns; it must be quick.
+     */
+    public static MachineAnalysis analyze(MachineInputs inputs, List<String> contourNames, ProgressListener progress,
+            CancellationFlag cancel, AnalysisMemo memo, Consumer<ContourResult> contourDone) {
         List<MappedContour> contours = selectContours(inputs, contourNames);
         int total = inputs.axes().size() + contours.stream().mapToInt(c -> isFullCircle(c.path()) ? 2 : 1).sum();
         AtomicInteger done = new AtomicInteger();
@@ -101,6 +114,16 @@ public final class MachineAnalyzer {
             }
             contourWork.add(new ContourWork(contour, first, second, setup, runs));
         }
+        // Each contour's result as soon as its runs are done: it needs only the runs and each axis's Kv.
+        List<CompletableFuture<ContourResult>> contourResults = new ArrayList<>();
+        SharedBidirectional shared = new SharedBidirectional();
+        for (ContourWork w : contourWork) {
+            CompletableFuture<ContourResult> result = CompletableFuture.allOf(w.runs().toArray(CompletableFuture[]::new))
+                    .thenApply(allDone -> contourResult(w, w.runs().stream().map(CompletableFuture::join).toList(),
+                            shared));
+            result.thenAccept(contourDone);
+            contourResults.add(result);
+        }
 
         // Axis dynamics: queued behind the runs, last axis first, while this thread works from the first axis; the
         // memo hands each axis to whichever gets there first (on two cores: runs in the pool, dynamics here).
@@ -118,22 +141,18 @@ public final class MachineAnalyzer {
             join(q);
         }
 
-        List<ContourResult> contourResults = new ArrayList<>();
-        for (ContourWork w : contourWork) {
-            List<ContourRun> runs = w.runs().stream().map(MachineAnalyzer::join).toList();
-            contourResults.add(contourResult(w, runs, dynamics.get(w.first().id()), dynamics.get(w.second().id())));
-        }
+        List<ContourResult> contoursDone = contourResults.stream().map(MachineAnalyzer::join).toList();
 
         List<AxisResult> axisResults = new ArrayList<>();
         for (MappedAxis axis : inputs.axes()) {
-            axisResults.add(axisResult(axis, dynamics.get(axis.id()), contourResults));
+            axisResults.add(axisResult(axis, dynamics.get(axis.id()), contoursDone));
         }
         List<String> notes = new ArrayList<>();
         notes.add("contours are simulated with the linear closed loop of each axis (friction, saturation and"
                 + " quantisation not in the tracking simulation; see the budget lines for them)");
         notes.add("following error at a contour feed: v/Kv_eff at the largest axis velocity of the planned contour");
         return new MachineAnalysis(inputs.id(), inputs.name(), inputs.interpolationPeriod(), axisResults,
-                contourResults, notes);
+                contoursDone, notes);
     }
 
     // ------------------------------------------------------------------------------------------------ contours
@@ -254,8 +273,7 @@ public final class MachineAnalyzer {
                 reference.time(n - 1), n);
     }
 
-    private static ContourResult contourResult(ContourWork work, List<ContourRun> runs, AxisDynamics first,
-            AxisDynamics second) {
+    private static ContourResult contourResult(ContourWork work, List<ContourRun> runs, SharedBidirectional shared) {
         MappedContour contour = work.contour();
         Optional<BidirectionalCircleResult> bidirectional = Optional.empty();
         RunDirection programmed = RunDirection.PROGRAMMED;
@@ -266,8 +284,7 @@ public final class MachineAnalyzer {
             radius = setup.radius();
             ContourRun cw = runs.stream().filter(r -> r.direction() == RunDirection.CW).findFirst().orElseThrow();
             ContourRun ccw = runs.stream().filter(r -> r.direction() == RunDirection.CCW).findFirst().orElseThrow();
-            bidirectional = Optional.of(CircleTest.bidirectional(cw.circleSetup().orElseThrow(), cw.tracking(),
-                    ccw.circleSetup().orElseThrow(), ccw.tracking()));
+            bidirectional = Optional.of(shared.of(cw, ccw));
         }
         List<String> notes = new ArrayList<>(contour.notes());
         if (work.setup().isPresent()) {
@@ -275,16 +292,11 @@ public final class MachineAnalyzer {
                     Math.toDegrees(work.setup().get().overshootAngle())) + "° before and after the evaluated 360°"
                     + " (ISO 230-4 set-up), so feed ramps are not evaluated");
         }
-        ContourEstimate estimate = estimate(contour, runs.get(0), radius, first, second);
+        ContourEstimate estimate = estimate(contour, runs.get(0).trajectory(), radius,
+                work.first().model().positionLoopKv(), work.second().model().positionLoopKv());
         return new ContourResult(contour.id(), contour.name(), contour.firstAxisId(), contour.secondAxisId(),
                 work.first().name(), work.second().name(), contour.limits().feed(), contour.samplePeriod(),
                 work.setup().isPresent(), programmed, radius, runs, bidirectional, estimate, notes);
-    }
-
-    /** Closed-form values beside the simulation (DOMAIN.md §4), Kv of the analysed position loops. */
-    private static ContourEstimate estimate(MappedContour contour, ContourRun programmed, double radius,
-            AxisDynamics first, AxisDynamics second) {
-        return estimate(contour, programmed.trajectory(), radius, first.positionGain(), second.positionGain());
     }
 
     /**
@@ -403,6 +415,21 @@ public final class MachineAnalyzer {
                 throw error;
             }
             throw failed;
+        }
+    }
+
+    /**
+     * G(b) of each CW/CCW pair of runs, fitted once per analysis: a circle programmed CW and the same circle programmed
+     * CCW share their two runs (through the memo), and so their bidirectional result.
+     */
+    private static final class SharedBidirectional {
+        private final Map<ContourRun, Map<ContourRun, BidirectionalCircleResult>> byRuns = new IdentityHashMap<>();
+
+        synchronized BidirectionalCircleResult of(ContourRun cw, ContourRun ccw) {
+            return byRuns.computeIfAbsent(cw, k -> new IdentityHashMap<>()).computeIfAbsent(ccw,
+                    k -> CircleTest.bidirectional(cw.circleSetup().orElseThrow(), cw.tracking(),
+                            cw.circleTest().orElseThrow(), ccw.circleSetup().orElseThrow(), ccw.tracking(),
+                            ccw.circleTest().orElseThrow()));
         }
     }
 

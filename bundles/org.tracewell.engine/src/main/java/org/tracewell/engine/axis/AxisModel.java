@@ -226,6 +226,16 @@ public record AxisModel(String name, AxisPlant plant, CascadeController controll
 
     // ---- analysis ----------------------------------------------------------------------------
 
+    /**
+     * Kv of the position loop, 1/s: its velocity error constant, as {@link AxisDynamics#positionGain()} reports it
+     * after {@link #analyze()}, from the coefficients alone (no roots, no frequency response), so a contour's
+     * closed-form estimates need not wait for the whole analysis. The constant does not depend on stability.
+     */
+    public double positionLoopKv() {
+        TransferFunction loop = positionOpenLoop().withPadeDelay(padeOrder);
+        return SteadyState.ofUnityFeedback(TransferFunction.of(loop.numerator(), loop.denominator()), true).kv();
+    }
+
     /** Analyses both loops and the reference tracking. */
     public AxisDynamics analyze() {
         // Both loops go to the analyzer with their dead time already as Padé of this model's order: its own

@@ -40,6 +40,30 @@ public final class CircleTest {
         return bidirectional(clockwiseSetup, cw[0], cw[1], counterClockwiseSetup, ccw[0], ccw[1]);
     }
 
+    /**
+     * As {@link #bidirectional(CircleTestSetup, TrackingResult, CircleTestSetup, TrackingResult)} for runs already
+     * evaluated one by one ({@link #evaluate(CircleTestSetup, TrackingResult)} of each): only the common circle of
+     * both is fitted, the runs' own results are taken as they are.
+     */
+    public static BidirectionalCircleResult bidirectional(CircleTestSetup clockwiseSetup, TrackingResult clockwise,
+                                                          CircleTestResult clockwiseResult,
+                                                          CircleTestSetup counterClockwiseSetup,
+                                                          TrackingResult counterClockwise,
+                                                          CircleTestResult counterClockwiseResult) {
+        if (clockwiseSetup.direction() == counterClockwiseSetup.direction()
+                || clockwiseResult.direction() != clockwiseSetup.direction()
+                || counterClockwiseResult.direction() != counterClockwiseSetup.direction()) {
+            throw new IllegalArgumentException("a bidirectional test needs one CW and one CCW run with their own"
+                    + " results, got " + clockwiseSetup.direction() + "/" + clockwiseResult.direction() + " and "
+                    + counterClockwiseSetup.direction() + "/" + counterClockwiseResult.direction());
+        }
+        double[][] cw = project(clockwiseSetup.plane(), clockwise);
+        double[][] ccw = project(counterClockwiseSetup.plane(), counterClockwise);
+        double[][] a = select(clockwiseSetup, cw[0], cw[1]);
+        double[][] b = select(counterClockwiseSetup, ccw[0], ccw[1]);
+        return common(clockwiseResult, counterClockwiseResult, a, b);
+    }
+
     /** As {@link #bidirectional(CircleTestSetup, TrackingResult, CircleTestSetup, TrackingResult)}, for plane points. */
     public static BidirectionalCircleResult bidirectional(CircleTestSetup clockwiseSetup, double[] cwU, double[] cwV,
                                                           CircleTestSetup counterClockwiseSetup, double[] ccwU,
@@ -52,6 +76,12 @@ public final class CircleTest {
         double[][] b = select(counterClockwiseSetup, ccwU, ccwV);
         CircleTestResult first = evaluateSelected(clockwiseSetup, a[0], a[1]);
         CircleTestResult second = evaluateSelected(counterClockwiseSetup, b[0], b[1]);
+        return common(first, second, a, b);
+    }
+
+    /** G(b) of two evaluated runs from their selected points {u, v}: the band about their common circle. */
+    private static BidirectionalCircleResult common(CircleTestResult first, CircleTestResult second, double[][] a,
+                                                    double[][] b) {
         double[] u = concat(a[0], b[0]);
         double[] v = concat(a[1], b[1]);
         FittedCircle common = CircleFit.geometric(u, v, 0, u.length);

@@ -43,6 +43,8 @@ class CascadeLoopTest {
         AxisDynamics full = AxisModel.of("X", plants[2], CascadeController.continuous(25, 1.0, 0.01)).analyze();
         assertEquals(1, full.positionLoopType());
         assertEquals(25, full.positionGain(), 1e-9 * 25);
+        assertEquals(full.positionGain(), AxisModel.of("X", plants[2], CascadeController.continuous(25, 1.0, 0.01))
+                .positionLoopKv(), 0.0);
         // Integral velocity action gives infinite static stiffness to a constant load force (DOMAIN.md §1 [der])
         AxisModel pi = AxisModel.of("X", linearMotor(Double.POSITIVE_INFINITY, 40), CascadeController.continuous(25, 3000, 0.01));
         assertEquals(Double.POSITIVE_INFINITY, pi.staticStiffness());
@@ -58,6 +60,8 @@ class CascadeLoopTest {
                 CascadeController.continuous(25, kp, Double.POSITIVE_INFINITY));
         AxisDynamics d = axis.analyze();
         assertEquals(25 * kp / (kp + b), d.positionGain(), 1e-9);
+        // the constant from the coefficients alone is the analysis's, exactly
+        assertEquals(d.positionGain(), axis.positionLoopKv(), 0.0);
         assertEquals(25 * kp, axis.staticStiffness(), 1e-6 * 25 * kp);
     }
 

@@ -1,6 +1,7 @@
 package org.tracewell.engine.contour;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -90,6 +91,14 @@ class CircleTestTest {
         assertEquals(rc.circularDeviation(), rc.ellipsePeakToPeak(), 0.02 * rc.circularDeviation());
         // G(b) spans both runs, so it is at least either one
         assertTrue(both.bidirectionalDeviation() >= Math.max(rc.circularDeviation(), rw.circularDeviation()) - 1e-12);
+        // from the runs' own results, only the common circle fitted: the same figures
+        BidirectionalCircleResult reused = CircleTest.bidirectional(cwSetup, cw, CircleTest.evaluate(cwSetup, cw),
+                ccwSetup, ccw, CircleTest.evaluate(ccwSetup, ccw));
+        assertEquals(both.bidirectionalDeviation(), reused.bidirectionalDeviation(), 0.0);
+        assertEquals(rc.circularDeviation(), reused.counterClockwise().circularDeviation(), 0.0);
+        assertEquals(rw.circularDeviation(), reused.clockwise().circularDeviation(), 0.0);
+        assertThrows(IllegalArgumentException.class, () -> CircleTest.bidirectional(cwSetup, cw,
+                CircleTest.evaluate(ccwSetup, ccw), ccwSetup, ccw, CircleTest.evaluate(ccwSetup, ccw)));
     }
 
     private static double steadyStateBand(double kx, double ky) {

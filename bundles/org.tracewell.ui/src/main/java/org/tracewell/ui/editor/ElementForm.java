@@ -126,13 +126,26 @@ public final class ElementForm {
         if (element == null || body.isDisposed()) {
             return;
         }
-        if (title != null && !title.isDisposed()) {
+        List<Control> changed = new ArrayList<>();
+        if (title != null && !title.isDisposed() && !labelOf(element).equals(title.getText())) {
             title.setText(labelOf(element));
+            changed.add(title);
         }
         for (Row row : rows) {
-            row.refresh();
+            row.refresh(changed);
         }
-        relayout();
+        relayout(changed);
+    }
+
+    /**
+     * Lays the form out again after {@code changed} controls changed size. Only they are measured again (the others
+     * keep their cached sizes): measuring every row of a long form after each edit took longer than the edit itself.
+     */
+    private void relayout(List<Control> changed) {
+        if (!changed.isEmpty() && !body.isDisposed()) {
+            body.layout(changed.toArray(Control[]::new));
+            scroller.setMinSize(body.computeSize(SWT.DEFAULT, SWT.DEFAULT, false));
+        }
     }
 
     /** The value control of {@code feature} in the current form, if shown. */
@@ -204,7 +217,7 @@ public final class ElementForm {
             decoration.setImage(FieldDecorationRegistry.getDefault()
                     .getFieldDecoration(FieldDecorationRegistry.DEC_ERROR).getImage());
             decoration.hide();
-            refresh();
+            refresh(new ArrayList<>()); // the form is laid out once all rows are there
         }
 
         /** Shows or hides the reason line (and the empty cell before it, under the name). */
@@ -311,15 +324,29 @@ public final class ElementForm {
         }
 
         void refresh() {
+            List<Control> changed = new ArrayList<>();
+            refresh(changed);
+            relayout(changed);
+        }
+
+        /** Shows the model's value again; adds the controls whose size may have changed to {@code changed}. */
+        void refresh(List<Control> changed) {
             if (value.isDisposed()) {
                 return;
             }
             if (!rejected) {
                 decoration.hide();
+                if (reason.getVisible()) {
+                    changed.add(reason);
+                }
                 showReason(null);
                 refreshValue();
             }
-            stored.setText(storedText());
+            String text = storedText();
+            if (!text.equals(stored.getText())) {
+                stored.setText(text);
+                changed.add(stored);
+            }
         }
 
         private void refreshValue() {

@@ -19,6 +19,7 @@ import org.eclipse.ui.IWorkbenchPartReference;
 import org.tracewell.core.analysis.AnalysisCancelledException;
 import org.tracewell.core.analysis.AnalysisMemo;
 import org.tracewell.core.analysis.CancellationFlag;
+import org.tracewell.core.analysis.ContourResult;
 import org.tracewell.core.analysis.ProgressListener;
 import org.tracewell.core.mapping.MappingException;
 import org.tracewell.model.Machine;
@@ -31,18 +32,18 @@ import org.tracewell.ui.editor.MachineEditorInput;
  * The design review of the machine in the page's active Machine Editor, shared by the views that show it (Requirement
  * Trace, Error Budget, Tracking, Contour Deviation, Circle Test), so one edit runs one review. Follows part
  * activation; re-runs the review in a job a short pause after the editor's command stack changes (edit, undo, redo);
- * only the newest review is published. Reviews find the analyses of unchanged axes and contour runs in {@link #MEMO},
- * so an edit costs what it changed. Used on the UI thread only; listeners are called there.
+ * only the newest review is published, and each of its contours as soon as it is done. Reviews find the analyses of
+ * unchanged axes and contour runs in {@link #MEMO}, so an edit costs what it changed. Used on the UI thread only; listeners are called there.
  */
 final class ActiveMachineReview {
 
     /**
-     * Pause after the last model change before reviewing, ms. Short: a change arrives as one command, not per
-     * keystroke, and thanks to the memo a review after an edit only recomputes what the edit changed. It folds a burst
-     * (an undo of several commands) into one review and lets the Loop Analysis view's analysis of the edited axis,
-     * which starts at once, go first on a machine with few cores.
+     * Pause after the last model change before reviewing, ms: none beyond the events already queued. A change arrives
+     * as one command, not per keystroke, so a burst (an undo of several commands) is folded by the generation check
+     * alone; thanks to the memo a review after an edit only recomputes what the edit changed, and the axis the Loop
+     * Analysis view is already analysing is waited for, not analysed again.
      */
-    static final int DEBOUNCE_MS = 10;
+    static final int DEBOUNCE_MS = 0;
 
     /**
      * The analyses every view of the workbench shares, by value of their inputs (a pure-function cache: whichever
@@ -69,6 +70,8 @@ final class ActiveMachineReview {
     private final ListenerList<Consumer<Outcome>> listeners = new ListenerList<>();
     /** Told before {@link #listeners}: views that only hand the drawing to a job, so their jobs start first. */
     private final ListenerList<Consumer<Outcome>> first = new ListenerList<>();
+    /** Told of each contour of the running review as soon as it is done, before the review's outcome. */
+    private final ListenerList<Consumer<ContourResult>> contourListeners = new ListenerList<>();
     /** Stamps of the last published review: timer fired, job started, review done, published, job scheduled. */
     private volatile long[] lastTimings = new long[5];
     private volatile long scheduledAt;
@@ -116,6 +119,22 @@ final class ActiveMachineReview {
         (early ? review.first : review.listeners).add(listener);
         listener.accept(review.latest);
         return review;
+    }
+
+    /**
+     * Tells {@code listener} (on the UI thread) of each contour of a running review as soon as its runs are done:
+     * the very result the review's outcome will hold, while the outcome still holds the previous review. A view of
+     * one contour draws it without waiting for the rest of the machine (the axes' dynamics, other contours, the
+     * budget). Removed with {@link #unsubscribe(Consumer, Consumer)}.
+     */
+    void addContourListener(Consumer<ContourResult> listener) {
+        contourListeners.add(listener);
+    }
+
+    /** Ends a subscription with its contour listener. */
+    void unsubscribe(Consumer<Outcome> listener, Consumer<ContourResult> contourListener) {
+        contourListeners.remove(contourListener);
+        unsubscribe(listener);
     }
 
     /** Ends the subscription; the last one stops following the editor. */
@@ -187,7 +206,7 @@ final class ActiveMachineReview {
                 Outcome outcome;
                 try {
                     ReviewResults results = DesignReview.run(copy, WorkbenchProvenance.of(file, dirty),
-                            ProgressListener.SILENT, cancel, MEMO);
+                            ProgressListener.SILENT, cancel, MEMO, contour -> tellContour(mine, contour));
                     outcome = new Outcome(name, results, "", false);
                 } catch (AnalysisCancelledException superseded) {
                     return Status.CANCEL_STATUS;
@@ -212,6 +231,20 @@ final class ActiveMachineReview {
             scheduledAt = System.nanoTime();
             // Told after the job is on its way, so the views' work on this thread does not hold the review back.
             publish(new Outcome(name, latest.results(), latest.problem(), true));
+        });
+    }
+
+    /** Hands a contour of review {@code mine} to the contour listeners on the UI thread, unless superseded. */
+    private void tellContour(long mine, ContourResult contour) {
+        if (contourListeners.isEmpty() || display.isDisposed()) {
+            return;
+        }
+        display.asyncExec(() -> {
+            if (mine == generation.get()) {
+                for (Consumer<ContourResult> listener : contourListeners) {
+                    listener.accept(contour);
+                }
+            }
         });
     }
 

@@ -1,7 +1,9 @@
 package org.tracewell.ui.views;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.function.Consumer;
 
@@ -32,7 +34,7 @@ import org.tracewell.ui.charts.ChartCanvas;
 
 /**
  * A view of one contour of the active machine's review ({@link ActiveMachineReview}): it follows the contour (or axis)
- * selected in the Machine Editor, redraws when a new review arrives, and builds and draws its chart in a job, so the
+ * selected in the Machine Editor, redraws when a new review's results for it are done (before the whole review), and builds and draws its chart in a job, so the
  * UI thread only copies pixels. Nothing is drawn while the view is hidden; it catches up when shown. A review that
  * leaves the shown contour's runs as they were (an edit elsewhere; the memo hands back the same runs) redraws
  * nothing.
@@ -50,7 +52,7 @@ public abstract class ContourView extends ViewPart {
     private record Drawn(Drawing drawing, ChartCanvas.Drawn pixels, long startedNanos, long finishedNanos) {
     }
 
-    /** What is on screen, and what it was drawn from (to skip drawing the same again). */
+    /** What is on screen (or on its way), and what it was drawn from (to skip drawing the same again). */
     private record Shown(ContourResult contour, int runIndex, Object options, Drawing drawing) {
 
         String contourId() {
@@ -59,6 +61,12 @@ public abstract class ContourView extends ViewPart {
 
         List<ContourRun> runs() {
             return contour.runs();
+        }
+
+        /** True when {@code other}'s run {@code index} with {@code otherOptions} draws as this does. */
+        boolean sameAs(ContourResult other, int index, Object otherOptions) {
+            return contourId().equals(other.contourId()) && runs().equals(other.runs()) && runIndex == index
+                    && Objects.equals(options, otherOptions);
         }
     }
 
@@ -72,12 +80,23 @@ public abstract class ContourView extends ViewPart {
     private String wantedContourId;
     private boolean stale;
     private volatile Shown shown;
+    /** What the drawing job on its way will show (its drawing not made yet); null when none is. UI thread. */
+    private Shown pending;
+    /** The heading the newest request asked for, shown with the drawing. UI thread. */
+    private String pendingTitle = "";
     private volatile long lastRedrawNanos;
     private volatile long[] lastTimings = new long[4];
     private final ListenerList<Runnable> redrawListeners = new ListenerList<>();
     private final List<String> runLabels = new ArrayList<>();
+    /** Contours of the running review done ahead of it, by id (emptied when a review starts and when it arrives). */
+    private final Map<String, ContourResult> doneAhead = new HashMap<>();
     private final Consumer<ActiveMachineReview.Outcome> reviewListener = outcome -> {
         latest = outcome;
+        doneAhead.clear();
+        redraw(0);
+    };
+    private final Consumer<ContourResult> contourListener = contour -> {
+        doneAhead.put(contour.contourId(), contour);
         redraw(0);
     };
     private final ISelectionListener selectionListener = this::selectionChanged;
@@ -180,6 +199,7 @@ public abstract class ContourView extends ViewPart {
             selectionChanged(getSite().getPage().getActivePart(), current);
         }
         review = ActiveMachineReview.subscribe(getSite().getPage(), reviewListener, true);
+        review.addContourListener(contourListener);
         // The view becomes visible after this method returns; draw then.
         parent.getDisplay().asyncExec(() -> redraw(0));
     }
@@ -225,6 +245,7 @@ public abstract class ContourView extends ViewPart {
         ActiveMachineReview.Outcome outcome = latest;
         if (outcome == null || outcome.results() == null) {
             work.next(); // nothing older may land on top of the message
+            pending = null;
             String text = outcome == null ? "" : outcome.running() ? "Analysing " + outcome.machineName() + "…"
                     : outcome.problem();
             showMessage(text);
@@ -238,30 +259,47 @@ public abstract class ContourView extends ViewPart {
         ContourResult contour = choose(outcome.results().analysis());
         if (contour == null) {
             work.next();
+            pending = null;
             showMessage(noContourMessage(outcome.machineName()));
             return;
         }
+        // While a review runs, its results for this contour may be done already: they are final, so show them.
+        ContourResult ahead = outcome.running() ? doneAhead.get(contour.contourId()) : null;
+        if (ahead != null && accepts(ahead)) {
+            contour = ahead;
+        }
+        boolean updating = outcome.running() && contour != ahead;
         int runIndex = choosesRun() ? chooseRun(contour) : -1;
         Object options = options();
         Shown now = shown;
         String title = contour.contourName() + " · " + contour.firstAxisName() + "/" + contour.secondAxisName()
-                + (outcome.running() ? " (updating…)" : "");
-        if (now != null && now.contourId().equals(contour.contourId()) && now.runs().equals(contour.runs())
-                && now.runIndex() == runIndex && Objects.equals(now.options(), options)) {
+                + (updating ? " (updating…)" : "");
+        pendingTitle = title;
+        if (pending != null && pending.sameAs(contour, runIndex, options)) {
+            return; // this very drawing is on its way: restarting it (as each further contour arrives) only delays it
+        }
+        if (now != null && now.sameAs(contour, runIndex, options)) {
             work.next(); // what is on screen is what would be drawn: drop any older drawing still on its way
+            pending = null;
             heading.setText(title);
             return;
         }
         Point size = canvas.drawingSize();
         long requested = System.nanoTime();
+        ContourResult drawn = contour;
+        Shown coming = new Shown(drawn, runIndex, options, null);
+        pending = coming;
         work.run(delayMs, getPartName() + ": " + contour.contourName(), () -> {
             long started = System.nanoTime();
-            Drawing drawing = draw(contour, runIndex, options, size == null ? DEFAULT_WIDTH_PX : size.x);
+            Drawing drawing = draw(drawn, runIndex, options, size == null ? DEFAULT_WIDTH_PX : size.x);
             return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size), started, System.nanoTime());
         }, result -> {
             Drawing drawing = result.drawing();
-            shown = new Shown(contour, runIndex, options, drawing);
-            heading.setText(title);
+            shown = new Shown(drawn, runIndex, options, drawing);
+            if (pending == coming) {
+                pending = null;
+            }
+            heading.setText(pendingTitle); // as the newest request for this drawing has it (updating or not)
             Labels.setKeepingLayout(summary, drawing.summary());
             canvas.show(result.pixels());
             canvas.update(); // paint now, so the time stamp is the finished redraw's
@@ -393,7 +431,7 @@ public abstract class ContourView extends ViewPart {
         getSite().getPage().removeSelectionListener(selectionListener);
         getSite().getPage().removePartListener(visibility);
         if (review != null) {
-            review.unsubscribe(reviewListener);
+            review.unsubscribe(reviewListener, contourListener);
         }
         super.dispose();
     }

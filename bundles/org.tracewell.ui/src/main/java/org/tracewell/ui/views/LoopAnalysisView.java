@@ -33,7 +33,6 @@ import org.eclipse.ui.part.ViewPart;
 import org.jfree.chart.JFreeChart;
 import org.tracewell.core.mapping.EngineMapping;
 import org.tracewell.core.mapping.MappingException;
-import org.tracewell.engine.axis.AxisDynamics;
 import org.tracewell.engine.axis.AxisModel;
 import org.tracewell.engine.loop.LoopAnalysis;
 import org.tracewell.engine.loop.LoopAnalyzer;
@@ -248,13 +247,10 @@ public final class LoopAnalysisView extends ViewPart {
                 showRejected(loopTitle, e.getMessage());
                 return;
             }
-            // The position loop as AxisModel.analyze() forms it (dead time as Padé of the model's order). Known
-            // already (an undo, another selection): taken from the memo. After an edit it is analysed here, alone and
-            // at once, rather than waiting for the whole axis (both loops) that the machine review analyses meanwhile.
-            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.knownDynamics(engineModel)
-                    .map(AxisDynamics::positionLoop)
-                    .orElseGet(() -> LoopAnalyzer.analyze(
-                            engineModel.positionOpenLoop().withPadeDelay(engineModel.padeOrder()), null)));
+            // The position loop of the axis's dynamics, from the memo the machine review shares: after an edit this
+            // view asks first and analyses the axis (both loops), and the review, asking a moment later, waits for
+            // it instead of analysing it again; on a machine with few cores the contour views' runs get the rest.
+            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.dynamics(engineModel).positionLoop());
         });
     }
 
