@@ -36,6 +36,15 @@ public final class CircleTestChart {
     /** The nominal circle is drawn when its distance from the runs is at most this many spreads. */
     static final double NOMINAL_WITHIN_SPREADS = 3;
 
+    /** Chart edge, px, the annotations are spaced for when no size is given (the report draws at about this). */
+    public static final int DEFAULT_SIZE_PX = 700;
+    /** Below this chart edge, px, reversal points keep their markers but not their labels (the legend names them). */
+    static final int LABELLED_REVERSALS_MIN_PX = 600;
+    /** Below this chart edge, px, the scale note takes two centre lines instead of one. */
+    static final int ONE_LINE_NOTE_MIN_PX = 560;
+    /** Height given to one line of centre text and the least gap between ring labels, px. */
+    static final double LINE_PX = 16;
+
     private CircleTestChart() {
     }
 
@@ -49,7 +58,18 @@ public final class CircleTestChart {
      */
     public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
             List<ReversalPoint> reversals, String uLabel, String vLabel) {
-        return create(title, nominalRadiusM, runs, bidirectionalG, List.of(), Double.NaN, reversals, uLabel, vLabel);
+        return create(title, nominalRadiusM, runs, bidirectionalG, reversals, uLabel, vLabel, DEFAULT_SIZE_PX);
+    }
+
+    /**
+     * As {@link #create(String, double, List, double, List, String, String)} for a chart drawn about {@code sizePx}
+     * square: the text inside the plot (fixed in pixels, placed in millimetres) is spaced so it does not overlap at
+     * that size, and gives way where there is no room.
+     */
+    public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
+            List<ReversalPoint> reversals, String uLabel, String vLabel, int sizePx) {
+        return create(title, nominalRadiusM, runs, bidirectionalG, List.of(), Double.NaN, reversals, uLabel, vLabel,
+                sizePx);
     }
 
     /**
@@ -64,6 +84,17 @@ public final class CircleTestChart {
     public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
             List<CircleRun> measured, double measuredBidirectionalG, List<ReversalPoint> reversals, String uLabel,
             String vLabel) {
+        return create(title, nominalRadiusM, runs, bidirectionalG, measured, measuredBidirectionalG, reversals, uLabel,
+                vLabel, DEFAULT_SIZE_PX);
+    }
+
+    /** As the method above, for a chart drawn about {@code sizePx} square (see the seven-argument form). */
+    public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
+            List<CircleRun> measured, double measuredBidirectionalG, List<ReversalPoint> reversals, String uLabel,
+            String vLabel, int sizePx) {
+        if (sizePx < 2) {
+            throw new IllegalArgumentException("chart size must be at least 2 px, got " + sizePx);
+        }
         if (!(nominalRadiusM > 0) || !Double.isFinite(nominalRadiusM)) {
             throw new IllegalArgumentException("nominal radius must be finite and > 0 m, got " + nominalRadiusM);
         }
@@ -137,8 +168,16 @@ public final class CircleTestChart {
         plot.setRangeGridlinesVisible(false);
         EqualAspect.apply(plot, 0.1, runData, rings);
 
+        // Text keeps its size in pixels while the plot scales: the plot spans about 2.4 R across about 82 % of the
+        // chart's edge, which gives the millimetres one pixel stands for.
+        double mmPerPx = 2.4 * radiusMm / (0.82 * sizePx);
+        double ringGapPx = scale.magnification() * scale.stepM() * 1e3 / mmPerPx;
+        int labelEvery = (int) Math.max(1, Math.ceil(LINE_PX / ringGapPx));
         double labelAngle = Math.toRadians(52);
         for (int i = 0; i <= scale.ringCount(); i++) {
+            if ((scale.ringCount() - i) % labelEvery != 0) {
+                continue; // too close to the next labelled ring at this size; the outermost is always labelled
+            }
             double r = scale.drawnRadiusMm(radiusMm, scale.ringValueM(i));
             XYTextAnnotation ringLabel = new XYTextAnnotation(ringLabel(scale.ringValueM(i)),
                     r * Math.cos(labelAngle), r * Math.sin(labelAngle));
@@ -150,7 +189,7 @@ public final class CircleTestChart {
         }
         double outer = radiusMm * 1.06;
         Set<String> labelled = new LinkedHashSet<>();
-        for (ReversalPoint p : reversals) {
+        for (ReversalPoint p : sizePx >= LABELLED_REVERSALS_MIN_PX ? reversals : List.<ReversalPoint>of()) {
             if (labelled.add(p.label() + "@" + Math.round(Math.toDegrees(p.angleRad())))) {
                 XYTextAnnotation a = new XYTextAnnotation(p.label(), outer * Math.cos(p.angleRad()),
                         outer * Math.sin(p.angleRad()));
@@ -167,15 +206,20 @@ public final class CircleTestChart {
         directions.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
         plot.addAnnotation(directions);
 
-        double lineHeight = radiusMm * 0.09;
+        double lineHeight = Math.max(radiusMm * 0.09, LINE_PX * mmPerPx);
+        String ringStep = "rings every " + Units.format3(scale.stepM() * 1e6) + " µm";
+        List<String> note = scale.nominalShown() ? List.of(ringStep) : sizePx >= ONE_LINE_NOTE_MIN_PX
+                ? List.of("nominal circle (0 µm) off scale; " + ringStep)
+                : List.of("nominal circle (0 µm) off scale", ringStep);
         int lineCount = all.size() + (Double.isFinite(bidirectionalG) ? 1 : 0)
-                + (Double.isFinite(measuredBidirectionalG) ? 1 : 0) + 1;
+                + (Double.isFinite(measuredBidirectionalG) ? 1 : 0) + note.size();
         double y = lineHeight * (lineCount - 1) / 2.0;
         y = figureLines(plot, runs, bidirectionalG, "G(b) ", y, lineHeight);
         y = figureLines(plot, measured, measuredBidirectionalG, "measured G(b) ", y, lineHeight);
-        plot.addAnnotation(centreText(scale.nominalShown() ? "rings every " + Units.format3(scale.stepM() * 1e6) + " µm"
-                : "nominal circle (0 µm) off scale; rings every " + Units.format3(scale.stepM() * 1e6) + " µm", y,
-                false));
+        for (String line : note) {
+            plot.addAnnotation(centreText(line, y, false));
+            y -= lineHeight;
+        }
         String fullTitle = title + " — radial deviation " + Magnification.label(scale.magnification());
         return ChartStyle.apply(new JFreeChart(fullTitle, ChartStyle.TITLE_FONT, plot, true));
     }

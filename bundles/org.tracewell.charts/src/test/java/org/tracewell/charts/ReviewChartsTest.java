@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
@@ -128,6 +129,44 @@ class ReviewChartsTest {
         BufferedImage image = render(chart, 760, 840);
         assertEquals(760, image.getWidth());
         assertEquals(840, image.getHeight());
+    }
+
+    @Test
+    void smallCircleTestPlotSpacesItsTextAndDropsWhatHasNoRoom() {
+        List<CircleRun> runs = List.of(ellipticRun("CW", -7e-6, 0.2e-6, 3600), ellipticRun("CCW", -7e-6, 0.2e-6, 3600));
+        JFreeChart small = CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6,
+                ReversalPoint.quadrants("X", "Y"), "X", "Y", 320);
+        XYPlot plot = small.getXYPlot();
+        String notes = texts(plot);
+        // the markers stay (the legend names them), their labels give way; the figures stay
+        assertEquals(8, plot.getDataset(1).getItemCount(0));
+        assertFalse(notes.contains("reverses"), notes);
+        assertTrue(notes.contains("CW:  G 0.400 µm,  F 7.20 µm") && notes.contains("G(b) 0.450 µm"), notes);
+        // centre lines at least one line of text apart in pixels: 2.4 R over 82 % of 320 px
+        double mmPerPx = 2.4 * 100 / (0.82 * 320);
+        List<Double> centreYs = new ArrayList<>();
+        List<Double> ringLabelRadii = new ArrayList<>();
+        for (Object a : plot.getAnnotations()) {
+            if (a instanceof XYTextAnnotation t && t.getX() == 0) {
+                centreYs.add(t.getY());
+            } else if (a instanceof XYTextAnnotation t && t.getText().endsWith("µm")) {
+                ringLabelRadii.add(Math.hypot(t.getX(), t.getY()));
+            }
+        }
+        centreYs.sort(null);
+        for (int i = 1; i < centreYs.size(); i++) {
+            assertTrue((centreYs.get(i) - centreYs.get(i - 1)) / mmPerPx >= CircleTestChart.LINE_PX - 1e-9,
+                    "centre lines " + centreYs);
+        }
+        ringLabelRadii.sort(null);
+        for (int i = 1; i < ringLabelRadii.size(); i++) {
+            assertTrue((ringLabelRadii.get(i) - ringLabelRadii.get(i - 1)) / mmPerPx >= CircleTestChart.LINE_PX - 1e-9,
+                    "ring labels " + ringLabelRadii);
+        }
+        // at the default size every ring is labelled and the reversals are named
+        String large = texts(CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6, ReversalPoint.quadrants("X",
+                "Y"), "X", "Y").getXYPlot());
+        assertTrue(large.contains("X reverses"), large);
     }
 
     @Test
