@@ -33,6 +33,7 @@ import org.tracewell.model.Contour;
 import org.tracewell.model.Machine;
 import org.tracewell.model.NotchFilter;
 import org.tracewell.model.Requirement;
+import org.tracewell.model.VariationStudy;
 import org.tracewell.ui.editor.ElementCommands;
 import org.tracewell.ui.editor.MachineEditor;
 
@@ -77,6 +78,26 @@ class ElementEditingTest {
         undo();
         assertEquals(before, machine.getAxes().size());
         assertFalse(editor.isDirty());
+    }
+
+    @Test
+    void addedStudyFromTheStudiesPageIsValidAndUndoable(@TempDir Path temp) throws Exception {
+        open(temp);
+        Machine machine = editor.model().machine();
+        int before = machine.getStudies().size();
+        ElementCommands.Edit add = editor.elementCommands().addToMachine(machine, MachineEditor.STUDIES_PAGE)
+                .orElseThrow();
+        assertEquals("Add study gain tolerance", add.label());
+        VariationStudy study = assertInstanceOf(VariationStudy.class,
+                editor.elementCommands().execute(add).orElseThrow());
+        assertEquals(before + 1, machine.getStudies().size());
+        assertEquals(List.of("axis[X1].controller.positionGain", "axis[Y].controller.positionGain"),
+                study.getParameters().stream().map(p -> p.getPath()).toList());
+        assertTrue(study.getParameters().stream().allMatch(p -> p.getId() != null), "ids assigned");
+        assertTrue(new ModelValidation().validate(machine).stream().noneMatch(p -> EcoreUtil.isAncestor(study,
+                p.element())), "the new study passes the checks");
+        undo();
+        assertEquals(before, machine.getStudies().size());
     }
 
     @Test

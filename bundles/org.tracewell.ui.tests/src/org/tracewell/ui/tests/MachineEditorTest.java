@@ -10,6 +10,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
 
@@ -58,8 +59,8 @@ class MachineEditorTest {
         IWorkbenchPage page = PlatformUI.getWorkbench().getActiveWorkbenchWindow().getActivePage();
         LoopAnalysisView view = (LoopAnalysisView) page.showView(LoopAnalysisView.ID);
         editor = MachineEditor.open(page, machineFile);
-        assertEquals(4, editor.pages().size());
-        assertEquals("Axes", editor.pages().get(0).title());
+        assertEquals(List.of("Axes", "Contours", "Requirements", "Budget", "Studies"),
+                editor.pages().stream().map(p -> p.title()).toList());
 
         Machine machine = editor.model().machine();
         Axis y = axis(machine, "Y");

@@ -75,7 +75,7 @@ class NewMachineWizardTest {
 
         MachineEditor editor = assertInstanceOf(MachineEditor.class, page.getActiveEditor());
         assertEquals("Bench XY.machine", editor.getPartName());
-        assertEquals(4, editor.pages().size());
+        assertEquals(5, editor.pages().size(), "Axes, Contours, Requirements, Budget, Studies");
         assertFalse(editor.isDirty());
     }
 

@@ -2,7 +2,9 @@ package org.tracewell.core.template;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 
 import org.eclipse.emf.common.util.URI;
 import org.eclipse.emf.ecore.resource.Resource;
@@ -24,7 +26,11 @@ import org.tracewell.model.Machine;
 import org.tracewell.model.Requirement;
 import org.tracewell.model.RequirementKind;
 import org.tracewell.model.RigidScrewDrive;
+import org.tracewell.model.StudyKind;
+import org.tracewell.model.ToleranceShape;
 import org.tracewell.model.TracewellFactory;
+import org.tracewell.model.VariationStudy;
+import org.tracewell.model.VariedParameter;
 
 /**
  * A minimal machine to start from: two ball-screw axes X and Y with matched cascade controllers, an ISO 230-4 circle
@@ -138,6 +144,50 @@ public record MachineTemplate(String name, double positionSamplePeriod, double v
         segment.setDirection(Direction.COUNTER_CLOCKWISE);
         circle.getSegments().add(segment);
         return circle;
+    }
+
+    /** Relative standard deviation of each position gain in {@link #newStudy}: 1 % (common practice for a start). */
+    public static final double STUDY_GAIN_SIGMA = 0.01;
+
+    /**
+     * A study to start from, valid and runnable as created: a Monte-Carlo run of 1000 variants (seed 1) over the
+     * position gains of the first full-circle contour's axes (else of the first two cascade-controlled axes), each
+     * normal with σ = 1 % of its value,
+     * collecting G of the first full-circle contour (or every requirement when there is none); named "gain tolerance",
+     * numbered when that name is taken. The user then sets what really varies.
+     */
+    public static VariationStudy newStudy(Machine machine) {
+        VariationStudy study = F.createVariationStudy();
+        String name = "gain tolerance";
+        for (int n = 2; taken(machine, name); n++) {
+            name = "gain tolerance " + n;
+        }
+        study.setName(name);
+        study.setKind(StudyKind.MONTE_CARLO);
+        study.setVariantCount(1000);
+        study.setSeed(1);
+        study.setDescription("Position gains varied ±1 % (1σ, normal): how much circular deviation the gain spread"
+                + " of the drives costs.");
+        Optional<Contour> circle = machine.getContours().stream()
+                .filter(c -> c.getSegments().size() == 1 && c.getSegments().get(0) instanceof FullCircle).findFirst();
+        // The circle's own axes when there is one: their gain mismatch is what G shows.
+        List<Axis> axes = circle.map(c -> List.copyOf(c.getAxisAssignment())).filter(a -> !a.isEmpty())
+                .orElse(machine.getAxes());
+        for (Axis axis : axes) {
+            if (axis.getController() instanceof CascadeController controller && study.getParameters().size() < 2) {
+                VariedParameter gain = F.createVariedParameter();
+                gain.setPath("axis[" + axis.getName() + "].controller.positionGain");
+                gain.setShape(ToleranceShape.NORMAL);
+                gain.setSigma(STUDY_GAIN_SIGMA * controller.getPositionGain());
+                study.getParameters().add(gain);
+            }
+        }
+        circle.ifPresent(c -> study.getMetrics().add("contour[" + c.getName() + "].G"));
+        return study;
+    }
+
+    private static boolean taken(Machine machine, String name) {
+        return machine.getStudies().stream().anyMatch(s -> name.equals(s.getName()));
     }
 
     /**

@@ -18,12 +18,19 @@ import org.tracewell.core.analysis.ContourRun;
 import org.tracewell.core.analysis.MachineAnalysis;
 import org.tracewell.core.analysis.MachineAnalyzer;
 import org.tracewell.core.analysis.ProgressListener;
+import org.tracewell.core.io.IdAssigner;
 import org.tracewell.core.io.ModelFiles;
 import org.tracewell.core.mapping.EngineMapping;
 import org.tracewell.core.validation.ModelValidation;
 import org.tracewell.core.validation.ValidationProblem;
+import org.tracewell.core.variation.StudyDefinition;
+import org.tracewell.core.variation.StudyResult;
+import org.tracewell.core.variation.StudyRunner;
+import org.tracewell.engine.variation.RunControl;
 import org.tracewell.model.CascadeController;
 import org.tracewell.model.Machine;
+import org.tracewell.model.TracewellPackage.Literals;
+import org.tracewell.model.VariationStudy;
 
 class MachineTemplateTest {
 
@@ -42,6 +49,33 @@ class MachineTemplateTest {
         Files.createDirectories(again.getParent());
         MachineTemplate.named("Bench XY").writeTo(again, new ModelFiles());
         assertEquals(Files.readString(file), Files.readString(again));
+    }
+
+    @Test
+    void newStudyValidatesRunsAndTakesAFreeName(@TempDir Path temp) throws Exception {
+        Path file = temp.resolve("Study XY.machine");
+        MachineTemplate.named("Study XY").writeTo(file, new ModelFiles());
+        Machine machine = new ModelFiles().loadMachine(file);
+        VariationStudy first = MachineTemplate.newStudy(machine);
+        IdAssigner.assignNewIds(first, machine, Literals.MACHINE__STUDIES, machine.eResource());
+        machine.getStudies().add(first);
+        VariationStudy second = MachineTemplate.newStudy(machine);
+        IdAssigner.assignNewIds(second, machine, Literals.MACHINE__STUDIES, machine.eResource());
+        machine.getStudies().add(second);
+        assertEquals("gain tolerance", first.getName());
+        assertEquals("gain tolerance 2", second.getName());
+        // both position gains, σ = 1 % of each
+        assertEquals(List.of("axis[X].controller.positionGain", "axis[Y].controller.positionGain"),
+                first.getParameters().stream().map(p -> p.getPath()).toList());
+        double kv = ((CascadeController) machine.getAxes().get(0).getController()).getPositionGain();
+        assertEquals(0.01 * kv, first.getParameters().get(0).getSigma(), 1e-15 * kv);
+        assertEquals(List.of("contour[circle R50 F2 CCW].G"), first.getMetrics());
+        List<ValidationProblem> problems = new ModelValidation().validate(machine);
+        assertTrue(problems.isEmpty(), problems.toString());
+        // runnable as created (a few variants here)
+        first.setVariantCount(8);
+        StudyResult result = StudyRunner.run(machine, StudyDefinition.of(first), RunControl.serial());
+        assertEquals(8, result.completedCount());
     }
 
     @Test

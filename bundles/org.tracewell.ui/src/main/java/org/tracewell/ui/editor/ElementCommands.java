@@ -30,6 +30,7 @@ import org.tracewell.model.Named;
 import org.tracewell.model.Requirement;
 import org.tracewell.model.TracewellFactory;
 import org.tracewell.model.TracewellPackage.Literals;
+import org.tracewell.model.VariationStudy;
 
 /**
  * The commands that add and delete elements in the Machine Editor: EMF's {@link CreateChildCommand} (children the
@@ -83,6 +84,10 @@ public final class ElementCommands {
                 BudgetLine line = TracewellFactory.eINSTANCE.createBudgetLine();
                 line.setName("new line");
                 yield Optional.of(create(machine, Literals.MACHINE__BUDGET_LINES, line, "Add budget line"));
+            }
+            case MachineEditor.STUDIES_PAGE -> {
+                VariationStudy study = MachineTemplate.newStudy(machine);
+                yield Optional.of(create(machine, Literals.MACHINE__STUDIES, study, "Add study " + study.getName()));
             }
             default -> Optional.empty();
         };

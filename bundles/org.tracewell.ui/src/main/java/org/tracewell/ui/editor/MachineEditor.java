@@ -85,6 +85,7 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
     public static final String CONTOURS_PAGE = "Contours";
     public static final String REQUIREMENTS_PAGE = "Requirements";
     public static final String BUDGET_PAGE = "Budget";
+    public static final String STUDIES_PAGE = "Studies";
 
     private final ModelFiles files = new ModelFiles();
     private final List<ModelPage> pages = new ArrayList<>();
@@ -185,6 +186,8 @@ public final class MachineEditor extends MultiPageEditorPart implements IEditing
             addModelPage(REQUIREMENTS_PAGE, "Machine requirements and their allocations to axes",
                     input -> machine.getRequirements());
             addModelPage(BUDGET_PAGE, "Error budget lines per axis and source", input -> machine.getBudgetLines());
+            addModelPage(STUDIES_PAGE, "Variation studies: Monte Carlo and sweeps over model values (run one with"
+                    + " Analysis → Run Variation Study…)", input -> machine.getStudies());
         } else {
             addModelPage(AXES_PAGE, "Axis file " + getEditorInput().getName(), input -> List.of(root));
         }

@@ -38,11 +38,12 @@ public final class GettingStarted {
                 + ".axis file.");
 
         heading(page, "2. Describe it in the Machine Editor");
-        text(page, "The pages Axes, Contours, Requirements and Budget show the machine as trees; the form beside a "
-                + "tree edits the selected element. Type values with their trade unit — \"3 m/min\", \"33.3 1/s\", "
-                + "\"2 (m/min)/mm\" — or without one to use the unit shown; the model stores SI. An entry the rules "
-                + "refuse stays in its field with the reason. Right-click in a tree to add an axis, contour, "
-                + "requirement or budget line, to add filter stages and segments (New ›) or to delete. Every change "
+        text(page, "The pages Axes, Contours, Requirements, Budget and Studies show the machine as trees; the form "
+                + "beside a tree edits the selected element. Type values with their trade unit — \"3 m/min\", "
+                + "\"33.3 1/s\", \"2 (m/min)/mm\" — or without one to use the unit shown; the model stores SI. An "
+                + "entry the rules refuse stays in its field with the reason. Right-click in a tree to add an axis, "
+                + "contour, requirement, budget line or variation study, to add filter stages, segments and varied "
+                + "parameters (New ›) or to delete. Every change "
                 + "can be undone (Edit → Undo). A shared library axis is marked: its changes are saved to its own "
                 + ".axis file and apply to every machine that uses it.");
 
