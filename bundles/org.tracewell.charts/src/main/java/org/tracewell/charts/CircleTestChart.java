@@ -14,6 +14,8 @@ import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
@@ -42,6 +44,8 @@ public final class CircleTestChart {
     static final int LABELLED_REVERSALS_MIN_PX = 600;
     /** Below this chart edge, px, the scale note takes two centre lines instead of one. */
     static final int ONE_LINE_NOTE_MIN_PX = 560;
+    /** Below this chart edge, px, the figures go under the plot instead of inside the rings. */
+    static final int CENTRE_TEXT_MIN_PX = 400;
     /** Height given to one line of centre text and the least gap between ring labels, px. */
     static final double LINE_PX = 16;
 
@@ -159,7 +163,7 @@ public final class CircleTestChart {
         NumberAxis v = new NumberAxis(vLabel);
         u.setVisible(false);
         v.setVisible(false);
-        XYPlot plot = new XYPlot(runData, u, v, runRenderer);
+        XYPlot plot = new SquarePlot(runData, u, v, runRenderer);
         plot.setDataset(1, reversalData);
         plot.setRenderer(1, reversalRenderer);
         plot.setDataset(2, rings);
@@ -206,37 +210,48 @@ public final class CircleTestChart {
         directions.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
         plot.addAnnotation(directions);
 
-        double lineHeight = Math.max(radiusMm * 0.09, LINE_PX * mmPerPx);
         String ringStep = "rings every " + Units.format3(scale.stepM() * 1e6) + " µm";
         List<String> note = scale.nominalShown() ? List.of(ringStep) : sizePx >= ONE_LINE_NOTE_MIN_PX
                 ? List.of("nominal circle (0 µm) off scale; " + ringStep)
                 : List.of("nominal circle (0 µm) off scale", ringStep);
-        int lineCount = all.size() + (Double.isFinite(bidirectionalG) ? 1 : 0)
-                + (Double.isFinite(measuredBidirectionalG) ? 1 : 0) + note.size();
-        double y = lineHeight * (lineCount - 1) / 2.0;
-        y = figureLines(plot, runs, bidirectionalG, "G(b) ", y, lineHeight);
-        y = figureLines(plot, measured, measuredBidirectionalG, "measured G(b) ", y, lineHeight);
-        for (String line : note) {
-            plot.addAnnotation(centreText(line, y, false));
-            y -= lineHeight;
-        }
+        List<CentreLine> lines = new ArrayList<>();
+        figureLines(lines, runs, bidirectionalG, "G(b) ");
+        figureLines(lines, measured, measuredBidirectionalG, "measured G(b) ");
+        note.forEach(text -> lines.add(new CentreLine(text, false)));
         String fullTitle = title + " — radial deviation " + Magnification.label(scale.magnification());
-        return ChartStyle.apply(new JFreeChart(fullTitle, ChartStyle.TITLE_FONT, plot, true));
+        JFreeChart chart = new JFreeChart(fullTitle, ChartStyle.TITLE_FONT, plot, true);
+        if (sizePx >= CENTRE_TEXT_MIN_PX) {
+            double lineHeight = Math.max(radiusMm * 0.09, LINE_PX * mmPerPx);
+            double y = lineHeight * (lines.size() - 1) / 2.0;
+            for (CentreLine line : lines) {
+                plot.addAnnotation(centreText(line.text(), y, line.bold()));
+                y -= lineHeight;
+            }
+        } else {
+            // No room inside the rings: the figures go under the plot, where the chart wraps them.
+            TextTitle figures = new TextTitle(String.join("  ·  ", lines.stream().map(CentreLine::text).toList()),
+                    ChartStyle.TICK_FONT);
+            figures.setPaint(ChartStyle.INK);
+            figures.setPosition(RectangleEdge.BOTTOM);
+            chart.addSubtitle(figures);
+        }
+        return ChartStyle.apply(chart);
     }
 
-    /** One centre line per run ("CW:  G … µm,  F … µm") and one for G(b) when given; returns the next line's y. */
-    private static double figureLines(XYPlot plot, List<CircleRun> runs, double bidirectionalG, String gbLabel,
-            double y, double lineHeight) {
+    /** One line of figures: G and F of a run, or G(b), or the scale note. */
+    private record CentreLine(String text, boolean bold) {
+    }
+
+    /** One line per run ("CW:  G … µm,  F … µm") and one for G(b) when given. */
+    private static void figureLines(List<CentreLine> lines, List<CircleRun> runs, double bidirectionalG,
+            String gbLabel) {
         for (CircleRun run : runs) {
-            plot.addAnnotation(centreText(run.label() + ":  G " + Units.format3(run.circularDeviationG() * 1e6)
-                    + " µm,  F " + Units.format3(run.radialDeviationF() * 1e6) + " µm", y, false));
-            y -= lineHeight;
+            lines.add(new CentreLine(run.label() + ":  G " + Units.format3(run.circularDeviationG() * 1e6)
+                    + " µm,  F " + Units.format3(run.radialDeviationF() * 1e6) + " µm", false));
         }
         if (Double.isFinite(bidirectionalG)) {
-            plot.addAnnotation(centreText(gbLabel + Units.format3(bidirectionalG * 1e6) + " µm", y, true));
-            y -= lineHeight;
+            lines.add(new CentreLine(gbLabel + Units.format3(bidirectionalG * 1e6) + " µm", true));
         }
-        return y;
     }
 
     /** The ring scale {@link #create} uses for these runs (predicted and measured together). */

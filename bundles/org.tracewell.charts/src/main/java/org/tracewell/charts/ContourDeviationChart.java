@@ -55,7 +55,7 @@ public final class ContourDeviationChart {
         renderer.setDrawSeriesLineAsPath(true); // one path per series, so the dashes run along the whole path
         NumberAxis u = new NumberAxis(uLabel + " (mm)");
         NumberAxis v = new NumberAxis(vLabel + " (mm)");
-        XYPlot plot = new XYPlot(data, u, v, renderer);
+        XYPlot plot = new SquarePlot(data, u, v, renderer);
         EqualAspect.apply(plot, 0.08, data);
 
         int at = contour.indexOfMax();

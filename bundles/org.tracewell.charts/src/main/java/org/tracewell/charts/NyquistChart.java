@@ -86,7 +86,7 @@ public final class NyquistChart {
 
         NumberAxis re = new NumberAxis("Real part of L(jω)");
         NumberAxis im = new NumberAxis("Imaginary part of L(jω)");
-        XYPlot plot = new XYPlot(data, re, im, renderer);
+        XYPlot plot = new SquarePlot(data, re, im, renderer);
         plot.addDomainMarker(new ValueMarker(0, ChartStyle.GRID.darker(), new BasicStroke(0.8f)));
         plot.addRangeMarker(new ValueMarker(0, ChartStyle.GRID.darker(), new BasicStroke(0.8f)));
 

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
@@ -14,12 +15,14 @@ import java.util.List;
 
 import javax.imageio.ImageIO;
 
+import org.jfree.chart.ChartRenderingInfo;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYAnnotation;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.SymbolAxis;
 import org.jfree.chart.plot.Marker;
 import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
 import org.jfree.data.xy.XYDataset;
 import org.junit.jupiter.api.Test;
@@ -134,16 +137,17 @@ class ReviewChartsTest {
     @Test
     void smallCircleTestPlotSpacesItsTextAndDropsWhatHasNoRoom() {
         List<CircleRun> runs = List.of(ellipticRun("CW", -7e-6, 0.2e-6, 3600), ellipticRun("CCW", -7e-6, 0.2e-6, 3600));
+        int size = 450;
         JFreeChart small = CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6,
-                ReversalPoint.quadrants("X", "Y"), "X", "Y", 320);
+                ReversalPoint.quadrants("X", "Y"), "X", "Y", size);
         XYPlot plot = small.getXYPlot();
         String notes = texts(plot);
         // the markers stay (the legend names them), their labels give way; the figures stay
         assertEquals(8, plot.getDataset(1).getItemCount(0));
         assertFalse(notes.contains("reverses"), notes);
         assertTrue(notes.contains("CW:  G 0.400 µm,  F 7.20 µm") && notes.contains("G(b) 0.450 µm"), notes);
-        // centre lines at least one line of text apart in pixels: 2.4 R over 82 % of 320 px
-        double mmPerPx = 2.4 * 100 / (0.82 * 320);
+        // centre lines and ring labels at least one line of text apart in pixels: 2.4 R over 82 % of the edge
+        double mmPerPx = 2.4 * 100 / (0.82 * size);
         List<Double> centreYs = new ArrayList<>();
         List<Double> ringLabelRadii = new ArrayList<>();
         for (Object a : plot.getAnnotations()) {
@@ -153,20 +157,41 @@ class ReviewChartsTest {
                 ringLabelRadii.add(Math.hypot(t.getX(), t.getY()));
             }
         }
-        centreYs.sort(null);
-        for (int i = 1; i < centreYs.size(); i++) {
-            assertTrue((centreYs.get(i) - centreYs.get(i - 1)) / mmPerPx >= CircleTestChart.LINE_PX - 1e-9,
-                    "centre lines " + centreYs);
+        assertTrue(centreYs.size() >= 4, "three figure lines and the note: " + centreYs);
+        for (List<Double> placed : List.of(centreYs, ringLabelRadii)) {
+            placed.sort(null);
+            for (int i = 1; i < placed.size(); i++) {
+                assertTrue((placed.get(i) - placed.get(i - 1)) / mmPerPx >= CircleTestChart.LINE_PX - 1e-9,
+                        "spacing " + placed);
+            }
         }
-        ringLabelRadii.sort(null);
-        for (int i = 1; i < ringLabelRadii.size(); i++) {
-            assertTrue((ringLabelRadii.get(i) - ringLabelRadii.get(i - 1)) / mmPerPx >= CircleTestChart.LINE_PX - 1e-9,
-                    "ring labels " + ringLabelRadii);
-        }
-        // at the default size every ring is labelled and the reversals are named
+        // smaller still, the figures leave the rings for a line under the plot
+        JFreeChart tiny = CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6, ReversalPoint.quadrants("X", "Y"),
+                "X", "Y", 300);
+        assertFalse(texts(tiny.getXYPlot()).contains("G(b)"), texts(tiny.getXYPlot()));
+        String under = ((TextTitle) tiny.getSubtitle(tiny.getSubtitleCount() - 1)).getText();
+        assertTrue(under.contains("CW:  G 0.400 µm,  F 7.20 µm") && under.contains("G(b) 0.450 µm"), under);
+        // at the default size the reversals are named
         String large = texts(CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6, ReversalPoint.quadrants("X",
                 "Y"), "X", "Y").getXYPlot());
         assertTrue(large.contains("X reverses"), large);
+    }
+
+    @Test
+    void circleTestPlotHasASquareDataAreaSoTheCircleIsDrawnRound() {
+        List<CircleRun> runs = List.of(ellipticRun("CW", -7e-6, 0.2e-6, 3600), ellipticRun("CCW", -7e-6, 0.2e-6, 3600));
+        for (int[] size : new int[][] {{300, 300}, {700, 700}, {900, 500}, {400, 800}}) {
+            JFreeChart chart = CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6,
+                    ReversalPoint.quadrants("X", "Y"), "X", "Y", Math.min(size[0], size[1]));
+            ChartRenderingInfo info = new ChartRenderingInfo();
+            chart.createBufferedImage(size[0], size[1], BufferedImage.TYPE_INT_RGB, info);
+            Rectangle2D data = info.getPlotInfo().getDataArea();
+            // equal data spans on both axes (EqualAspect) drawn into a square: one mm is as long across as up
+            assertEquals(data.getWidth(), data.getHeight(), 1.0, size[0] + "×" + size[1] + ": " + data);
+            XYPlot plot = chart.getXYPlot();
+            assertEquals(plot.getDomainAxis().getRange().getLength(), plot.getRangeAxis().getRange().getLength(),
+                    1e-9);
+        }
     }
 
     @Test
