@@ -72,8 +72,18 @@ public final class CircleTestChart {
      */
     public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
             List<ReversalPoint> reversals, String uLabel, String vLabel, int sizePx) {
+        return create(title, nominalRadiusM, runs, bidirectionalG, reversals, uLabel, vLabel, sizePx, false);
+    }
+
+    /**
+     * As {@link #create(String, double, List, double, List, String, String, int)}; {@code figuresShownBeside} tells
+     * that the caller shows G, F and G(b) next to the chart (a view's figures line), so a chart too small for them
+     * inside the rings leaves them out instead of taking room from the plot for a line under it.
+     */
+    public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
+            List<ReversalPoint> reversals, String uLabel, String vLabel, int sizePx, boolean figuresShownBeside) {
         return create(title, nominalRadiusM, runs, bidirectionalG, List.of(), Double.NaN, reversals, uLabel, vLabel,
-                sizePx);
+                sizePx, figuresShownBeside);
     }
 
     /**
@@ -89,13 +99,16 @@ public final class CircleTestChart {
             List<CircleRun> measured, double measuredBidirectionalG, List<ReversalPoint> reversals, String uLabel,
             String vLabel) {
         return create(title, nominalRadiusM, runs, bidirectionalG, measured, measuredBidirectionalG, reversals, uLabel,
-                vLabel, DEFAULT_SIZE_PX);
+                vLabel, DEFAULT_SIZE_PX, false);
     }
 
-    /** As the method above, for a chart drawn about {@code sizePx} square (see the seven-argument form). */
+    /**
+     * As the method above, for a chart drawn about {@code sizePx} square, {@code figuresShownBeside} as in
+     * {@link #create(String, double, List, double, List, String, String, int, boolean)}.
+     */
     public static JFreeChart create(String title, double nominalRadiusM, List<CircleRun> runs, double bidirectionalG,
             List<CircleRun> measured, double measuredBidirectionalG, List<ReversalPoint> reversals, String uLabel,
-            String vLabel, int sizePx) {
+            String vLabel, int sizePx, boolean figuresShownBeside) {
         if (sizePx < 2) {
             throw new IllegalArgumentException("chart size must be at least 2 px, got " + sizePx);
         }
@@ -227,7 +240,7 @@ public final class CircleTestChart {
                 plot.addAnnotation(centreText(line.text(), y, line.bold()));
                 y -= lineHeight;
             }
-        } else {
+        } else if (!figuresShownBeside) {
             // No room inside the rings: the figures go under the plot, where the chart wraps them.
             TextTitle figures = new TextTitle(String.join("  ·  ", lines.stream().map(CentreLine::text).toList()),
                     ChartStyle.TICK_FONT);

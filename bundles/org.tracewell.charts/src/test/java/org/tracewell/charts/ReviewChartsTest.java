@@ -171,6 +171,11 @@ class ReviewChartsTest {
         assertFalse(texts(tiny.getXYPlot()).contains("G(b)"), texts(tiny.getXYPlot()));
         String under = ((TextTitle) tiny.getSubtitle(tiny.getSubtitleCount() - 1)).getText();
         assertTrue(under.contains("CW:  G 0.400 µm,  F 7.20 µm") && under.contains("G(b) 0.450 µm"), under);
+        // unless the caller shows them beside the chart (a view's figures line): then the plot keeps the room
+        JFreeChart beside = CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6,
+                ReversalPoint.quadrants("X", "Y"), "X", "Y", 300, true);
+        assertEquals(tiny.getSubtitleCount() - 1, beside.getSubtitleCount());
+        assertFalse(texts(beside.getXYPlot()).contains("G(b)"));
         // at the default size the reversals are named
         String large = texts(CircleTestChart.create("Circle test", 0.1, runs, 0.45e-6, ReversalPoint.quadrants("X",
                 "Y"), "X", "Y").getXYPlot());

@@ -134,9 +134,11 @@ public final class AnalyzeCommand {
             return ExitCode.INTERNAL_ERROR;
         }
         ReportInput reportInput = ReportInput.of(review, machine).withAuthor(options.author());
+        List<RanStudy> ran = List.of();
         if (options.studies() && !machine.getStudies().isEmpty()) {
             try {
-                reportInput = reportInput.withStudyResults(runStudies(machine, options.out(), bytes, file, err));
+                ran = runStudies(machine, options.out(), bytes, file, err);
+                reportInput = reportInput.withStudyResults(ran.stream().map(RanStudy::result).toList());
             } catch (IOException e) {
                 err.println(options.out() + ": error: cannot write the study results: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
@@ -158,7 +160,7 @@ public final class AnalyzeCommand {
                 }
             });
             String json = new GsonBuilder().setPrettyPrinting().serializeNulls().serializeSpecialFloatingPointValues()
-                    .disableHtmlEscaping().create().toJson(ResultsJson.of(review));
+                    .disableHtmlEscaping().create().toJson(ResultsJson.of(review, machine, ran, options.out()));
             Files.writeString(options.out().resolve("results.json"), json + "\n", StandardCharsets.UTF_8);
             for (ContourResult contour : review.analysis().contours()) {
                 for (ContourRun run : contour.runs()) {
@@ -241,10 +243,14 @@ public final class AnalyzeCommand {
                 author);
     }
 
+    /** A study run by {@code --studies} and the files it was written to. */
+    record RanStudy(StudyResult result, StudyFiles.Written files) {
+    }
+
     /** Every study the model asks for, on all cores, each written to DIR/studies/ as tracewell montecarlo/sweep do. */
-    private static List<StudyResult> runStudies(Machine machine, Path out, byte[] bytes, Path file, PrintStream err)
+    private static List<RanStudy> runStudies(Machine machine, Path out, byte[] bytes, Path file, PrintStream err)
             throws IOException, MappingException {
-        List<StudyResult> results = new ArrayList<>();
+        List<RanStudy> results = new ArrayList<>();
         ForkJoinPool pool = new ForkJoinPool(Runtime.getRuntime().availableProcessors());
         try {
             for (VariationStudy study : machine.getStudies()) {
@@ -256,9 +262,9 @@ public final class AnalyzeCommand {
                         err.println("study '" + definition.name() + "': " + done + "/" + total);
                     }
                 }, null));
-                StudyFiles.write(result, out.resolve("studies"), new StudyFiles.Provenance(TracewellCommand.version(),
-                        file.toString(), sha256(bytes), Instant.now(), "analyze --studies"));
-                results.add(result);
+                StudyFiles.Written written = StudyFiles.write(result, out.resolve("studies"), new StudyFiles.Provenance(
+                        TracewellCommand.version(), file.toString(), sha256(bytes), Instant.now(), "analyze --studies"));
+                results.add(new RanStudy(result, written));
             }
         } finally {
             pool.shutdown();
@@ -336,6 +342,49 @@ public final class AnalyzeCommand {
         }
 
         static JsonObject of(ReviewResults review) {
+            return of(review, null, List.of(), null);
+        }
+
+        /**
+         * With a "studies" entry per study of {@code machine}: run (its files, relative to {@code out}, and how many
+         * variants or grid points completed) or not run (and how to run it). No entry when {@code machine} is null.
+         */
+        static JsonObject of(ReviewResults review, Machine machine, List<RanStudy> ran, Path out) {
+            JsonObject root = ofReview(review);
+            if (machine != null) {
+                JsonArray studies = new JsonArray();
+                for (VariationStudy study : machine.getStudies()) {
+                    JsonObject o = new JsonObject();
+                    o.addProperty("name", study.getName());
+                    o.addProperty("kind", study.getKind().getLiteral());
+                    RanStudy done = ran.stream().filter(r -> r.result().definition().name().equals(study.getName()))
+                            .findFirst().orElse(null);
+                    o.addProperty("run", done != null);
+                    if (done == null) {
+                        o.addProperty("note", "not run; tracewell analyze --studies runs it (or tracewell "
+                                + (study.getKind() == StudyKind.SWEEP ? "sweep" : "montecarlo") + " --study NAME)");
+                    } else {
+                        o.addProperty("completed", done.result().completedCount());
+                        o.addProperty("planned", done.result().plannedCount());
+                        JsonObject files = new JsonObject();
+                        files.addProperty("json", relative(out, done.files().json()));
+                        files.addProperty("summaryCsv", relative(out, done.files().summary()));
+                        files.addProperty("dataCsv", relative(out, done.files().data()));
+                        o.add("files", files);
+                    }
+                    studies.add(o);
+                }
+                root.add("studies", studies);
+            }
+            return root;
+        }
+
+        /** {@code file} relative to {@code dir}, '/'-separated, so results.json reads the same on every system. */
+        private static String relative(Path dir, Path file) {
+            return dir.toAbsolutePath().relativize(file.toAbsolutePath()).toString().replace('\\', '/');
+        }
+
+        private static JsonObject ofReview(ReviewResults review) {
             JsonObject root = new JsonObject();
             root.addProperty("tool", "tracewell");
             root.addProperty("toolVersion", review.provenance().toolVersion());

@@ -1,6 +1,7 @@
 package org.tracewell.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
@@ -155,6 +156,20 @@ class StudyCommandTest {
         assertTrue(full.contains("Every grid point"), "the sweep's table");
         assertTrue(Files.exists(tmp.resolve("full/studies/XY_tolerances.json")));
         assertTrue(Files.exists(tmp.resolve("full/studies/Kv_match-grid.csv")));
+        // results.json says which studies ran and where their files are
+        JsonArray notRun = JsonParser.parseString(Files.readString(
+                tmp.resolve("plain/results.json"))).getAsJsonObject().getAsJsonArray("studies");
+        assertEquals(2, notRun.size());
+        assertFalse(notRun.get(0).getAsJsonObject().get("run").getAsBoolean());
+        assertTrue(notRun.get(0).getAsJsonObject().get("note").getAsString().contains("--studies"));
+        JsonObject first = JsonParser.parseString(Files.readString(
+                tmp.resolve("full/results.json"))).getAsJsonObject().getAsJsonArray("studies").get(0)
+                .getAsJsonObject();
+        assertTrue(first.get("run").getAsBoolean());
+        assertEquals(12, first.get("completed").getAsInt());
+        assertEquals("studies/XY_tolerances.json", first.getAsJsonObject("files").get("json").getAsString());
+        assertTrue(Files.exists(tmp.resolve("full").resolve(first.getAsJsonObject("files").get("dataCsv")
+                .getAsString())));
     }
 
     @Test

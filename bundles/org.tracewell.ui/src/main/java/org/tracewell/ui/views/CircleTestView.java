@@ -63,6 +63,6 @@ public final class CircleTestView extends ContourView {
                 .append(Units.mPerMin(contour.feed())).append(" m/min");
         return new Drawing(CircleTestChart.create(contour.contourName(), contour.radius(), runs, bidirectional,
                 ReversalPoint.quadrants(contour.firstAxisName(), contour.secondAxisName()), contour.firstAxisName(),
-                contour.secondAxisName(), widthPx), figures.toString());
+                contour.secondAxisName(), widthPx, true), figures.toString());
     }
 }
