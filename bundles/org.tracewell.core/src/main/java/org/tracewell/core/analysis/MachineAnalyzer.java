@@ -119,8 +119,11 @@ public final class MachineAnalyzer {
         SharedBidirectional shared = new SharedBidirectional();
         for (ContourWork w : contourWork) {
             CompletableFuture<ContourResult> result = CompletableFuture.allOf(w.runs().toArray(CompletableFuture[]::new))
-                    .thenApply(allDone -> contourResult(w, w.runs().stream().map(CompletableFuture::join).toList(),
-                            shared));
+                    .thenApply(allDone -> {
+                        // a superseded analysis fits no G(b)
+                        cancel.throwIfCancelled("contour '" + w.contour().name() + "'");
+                        return contourResult(w, w.runs().stream().map(CompletableFuture::join).toList(), shared);
+                    });
             result.thenAccept(contourDone);
             contourResults.add(result);
         }

@@ -214,6 +214,9 @@ final class ActiveMachineReview {
                     outcome = new Outcome(name, null, "Not reviewed: element " + e.getMessage(), false);
                 } catch (IllegalArgumentException | ArithmeticException e) {
                     outcome = new Outcome(name, null, "Not reviewed: " + e.getMessage(), false);
+                } catch (RuntimeException e) {
+                    // Whatever went wrong, the views must not keep saying "updating" over the last results.
+                    outcome = new Outcome(name, null, "Not reviewed: internal error " + e, false);
                 }
                 Outcome result = outcome;
                 long reviewed = System.nanoTime();

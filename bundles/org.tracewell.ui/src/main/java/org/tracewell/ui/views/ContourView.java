@@ -49,11 +49,12 @@ public abstract class ContourView extends ViewPart {
     }
 
     /** A drawing with its pixels, as the job hands it to the UI thread, and when the job started and finished. */
-    private record Drawn(Drawing drawing, ChartCanvas.Drawn pixels, long startedNanos, long finishedNanos) {
+    private record Drawn(Drawing drawing, ChartCanvas.Drawn pixels, long startedNanos, long finishedNanos,
+            String failure) {
     }
 
     /** What is on screen (or on its way), and what it was drawn from (to skip drawing the same again). */
-    private record Shown(ContourResult contour, int runIndex, Object options, Drawing drawing) {
+    private record Shown(ContourResult contour, int runIndex, Object options, Point size, Drawing drawing) {
 
         String contourId() {
             return contour.contourId();
@@ -63,10 +64,10 @@ public abstract class ContourView extends ViewPart {
             return contour.runs();
         }
 
-        /** True when {@code other}'s run {@code index} with {@code otherOptions} draws as this does. */
-        boolean sameAs(ContourResult other, int index, Object otherOptions) {
+        /** True when {@code other}'s run {@code index} with {@code otherOptions} at {@code otherSize} draws as this does. */
+        boolean sameAs(ContourResult other, int index, Object otherOptions, Point otherSize) {
             return contourId().equals(other.contourId()) && runs().equals(other.runs()) && runIndex == index
-                    && Objects.equals(options, otherOptions);
+                    && Objects.equals(options, otherOptions) && Objects.equals(size, otherSize);
         }
     }
 
@@ -88,15 +89,28 @@ public abstract class ContourView extends ViewPart {
     private volatile long[] lastTimings = new long[4];
     private final ListenerList<Runnable> redrawListeners = new ListenerList<>();
     private final List<String> runLabels = new ArrayList<>();
-    /** Contours of the running review done ahead of it, by id (emptied when a review starts and when it arrives). */
-    private final Map<String, ContourResult> doneAhead = new HashMap<>();
+    /** A contour done ahead of its review, and which review (by {@link #reviewsStarted}) it belongs to. */
+    private record Ahead(ContourResult contour, int review) {
+    }
+
+    /**
+     * Contours done ahead of the reviews since the last finished one, by id: newer than that review's results, and
+     * final when they belong to the review now running (emptied when a review's outcome arrives).
+     */
+    private final Map<String, Ahead> doneAhead = new HashMap<>();
+    /** Reviews started (running outcomes told); the contours of the newest are the ones told now. UI thread. */
+    private int reviewsStarted;
     private final Consumer<ActiveMachineReview.Outcome> reviewListener = outcome -> {
         latest = outcome;
-        doneAhead.clear();
+        if (outcome.running()) {
+            reviewsStarted++; // kept: a contour of a superseded review is still newer than the outcome's results
+        } else {
+            doneAhead.clear();
+        }
         redraw(0);
     };
     private final Consumer<ContourResult> contourListener = contour -> {
-        doneAhead.put(contour.contourId(), contour);
+        doneAhead.put(contour.contourId(), new Ahead(contour, reviewsStarted));
         redraw(0);
     };
     private final ISelectionListener selectionListener = this::selectionChanged;
@@ -190,6 +204,9 @@ public abstract class ContourView extends ViewPart {
         canvas = new ChartCanvas(parent, SWT.NONE);
         canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         canvas.setSquare(planePlot());
+        // A chart is built for its size (time series decimated per column, a circle test's text spaced): build it
+        // again once a resize settles.
+        canvas.addListener(SWT.Resize, e -> redraw(SELECTION_DEBOUNCE_MS));
         work = new NewestOnly(canvas);
 
         getSite().getPage().addPartListener(visibility);
@@ -263,42 +280,53 @@ public abstract class ContourView extends ViewPart {
             showMessage(noContourMessage(outcome.machineName()));
             return;
         }
-        // While a review runs, its results for this contour may be done already: they are final, so show them.
-        ContourResult ahead = outcome.running() ? doneAhead.get(contour.contourId()) : null;
-        if (ahead != null && accepts(ahead)) {
-            contour = ahead;
+        // While a review runs, its results for this contour may be done already: final when they are the running
+        // review's, newer than the outcome's results (an edit came before the last review finished) otherwise.
+        Ahead ahead = outcome.running() ? doneAhead.get(contour.contourId()) : null;
+        if (ahead != null && accepts(ahead.contour())) {
+            contour = ahead.contour();
         }
-        boolean updating = outcome.running() && contour != ahead;
+        boolean updating = outcome.running() && (ahead == null || ahead.review() != reviewsStarted);
         int runIndex = choosesRun() ? chooseRun(contour) : -1;
         Object options = options();
         Shown now = shown;
         String title = contour.contourName() + " · " + contour.firstAxisName() + "/" + contour.secondAxisName()
                 + (updating ? " (updating…)" : "");
         pendingTitle = title;
-        if (pending != null && pending.sameAs(contour, runIndex, options)) {
+        Point size = canvas.drawingSize();
+        if (pending != null && pending.sameAs(contour, runIndex, options, size)) {
             return; // this very drawing is on its way: restarting it (as each further contour arrives) only delays it
         }
-        if (now != null && now.sameAs(contour, runIndex, options)) {
+        if (now != null && now.sameAs(contour, runIndex, options, size)) {
             work.next(); // what is on screen is what would be drawn: drop any older drawing still on its way
             pending = null;
             heading.setText(title);
             return;
         }
-        Point size = canvas.drawingSize();
         long requested = System.nanoTime();
         ContourResult drawn = contour;
-        Shown coming = new Shown(drawn, runIndex, options, null);
+        Shown coming = new Shown(drawn, runIndex, options, size, null);
         pending = coming;
         work.run(delayMs, getPartName() + ": " + contour.contourName(), () -> {
             long started = System.nanoTime();
-            Drawing drawing = draw(drawn, runIndex, options, size == null ? DEFAULT_WIDTH_PX : size.x);
-            return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size), started, System.nanoTime());
+            try {
+                Drawing drawing = draw(drawn, runIndex, options, size == null ? DEFAULT_WIDTH_PX : size.x);
+                return new Drawn(drawing, ChartCanvas.draw(drawing.chart(), size), started, System.nanoTime(), null);
+            } catch (RuntimeException e) {
+                // e.g. figures a chart cannot scale to: say so in the view rather than leave the drawing pending
+                return new Drawn(null, null, started, System.nanoTime(), e.getMessage() == null ? e.toString()
+                        : e.getMessage());
+            }
         }, result -> {
-            Drawing drawing = result.drawing();
-            shown = new Shown(drawn, runIndex, options, drawing);
             if (pending == coming) {
                 pending = null;
             }
+            if (result.failure() != null) {
+                showMessage("Cannot draw " + drawn.contourName() + ": " + result.failure());
+                return;
+            }
+            Drawing drawing = result.drawing();
+            shown = new Shown(drawn, runIndex, options, size, drawing);
             heading.setText(pendingTitle); // as the newest request for this drawing has it (updating or not)
             Labels.setKeepingLayout(summary, drawing.summary());
             canvas.show(result.pixels());

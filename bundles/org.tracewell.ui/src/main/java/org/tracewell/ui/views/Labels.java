@@ -6,6 +6,9 @@ import org.eclipse.swt.widgets.Label;
 /** Label updates that keep the views' layout work small: laying out a view with a tree or table is costly. */
 final class Labels {
 
+    /** Pixels the native label may take for its own padding. */
+    private static final int SAFETY_PX = 4;
+
     private Labels() {
     }
 
@@ -21,7 +24,9 @@ final class Labels {
         }
         int width = label.getSize().x;
         label.setText(text);
-        if (width <= 0 || lineCount(label, text, width) != lineCount(label, before, width)) {
+        // Also a few pixels narrower: the label's own padding may wrap a line sooner than the bare text layout.
+        if (width <= SAFETY_PX || lineCount(label, text, width) != lineCount(label, before, width)
+                || lineCount(label, text, width - SAFETY_PX) != lineCount(label, before, width - SAFETY_PX)) {
             label.getParent().layout(true, true);
         }
     }

@@ -250,7 +250,15 @@ public final class LoopAnalysisView extends ViewPart {
             // The position loop of the axis's dynamics, from the memo the machine review shares: after an edit this
             // view asks first and analyses the axis (both loops), and the review, asking a moment later, waits for
             // it instead of analysing it again; on a machine with few cores the contour views' runs get the rest.
-            run(mine, loopTitle, () -> ActiveMachineReview.MEMO.dynamics(engineModel).positionLoop());
+            run(mine, loopTitle, () -> {
+                try {
+                    return ActiveMachineReview.MEMO.dynamics(engineModel).positionLoop();
+                } catch (IllegalArgumentException | ArithmeticException velocityLoopRefused) {
+                    // The axis as a whole could not be analysed (its velocity loop, say): the position loop alone.
+                    return LoopAnalyzer.analyze(engineModel.positionOpenLoop().withPadeDelay(engineModel.padeOrder()),
+                            null);
+                }
+            });
         });
     }
 
